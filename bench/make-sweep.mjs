@@ -1,0 +1,191 @@
+#!/usr/bin/env node
+/**
+ * Write a large model file (`modalgate-model/1`, JSON, SI) for the sweep benchmark: N flight
+ * conditions of an 8-state linear model (states u, w, q, theta, v, p, r, phi) of the Brannock
+ * BT-60 Tern, an invented twin-turboprop transport of our own (Class II-L).
+ *
+ * Each condition picks a phase (CR, CL, PA), an airspeed, an altitude, a weight and a centre of
+ * gravity from a seeded generator, so the same seed always gives the same file. The dimensional
+ * derivatives come from nondimensional coefficients by the usual stability-axis relations
+ * (as in Nelson, Flight Stability and Automatic Control, 2nd ed., ch. 4 and 5; from memory),
+ * with theta0 = 0 and Ixz = 0.
+ *
+ *   node bench/make-sweep.mjs [--count 10000] [--seed 20261] [--out sweep.json]
+ */
+import { writeFileSync } from 'node:fs';
+import { pathToFileURL } from 'node:url';
+
+/** [m/s^2] standard gravity */
+const G = 9.80665;
+
+/** The invented airframe; mass and inertia at the reference weight. */
+const TERN = {
+  name: 'Brannock BT-60 Tern (invented, benchmark sweep)',
+  class: 'II-L',
+  /** [m^2] wing area */ S: 44,
+  /** [m] mean aerodynamic chord */ cbar: 2.15,
+  /** [m] span */ b: 21.5,
+  /** [kg] reference mass */ mass: 12500,
+  /** [kg m^2] */ Ix: 98e3,
+  /** [kg m^2] */ Iy: 131e3,
+  /** [kg m^2] */ Iz: 214e3,
+};
+
+/** Phase envelopes: share of the conditions, airspeed [m/s], altitude [m], flap-dependent data. */
+const PHASES = [
+  { code: 'CR', share: 0.5, v: [105, 150], h: [3000, 7600], CD0: 0.027, CLa: 5.3, Clb: -0.075 },
+  { code: 'CL', share: 0.25, v: [72, 102], h: [300, 5200], CD0: 0.034, CLa: 5.4, Clb: -0.085 },
+  { code: 'PA', share: 0.25, v: [54, 68], h: [0, 900], CD0: 0.065, CLa: 5.7, Clb: -0.1 },
+];
+
+/** Seeded generator (mulberry32): small, fast, and the same sequence on every platform. */
+function generator(seed) {
+  let a = seed >>> 0;
+  return () => {
+    a = (a + 0x6d2b79f5) >>> 0;
+    let t = a;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
+
+/**
+ * Air density [kg/m^3] in the troposphere (h < 11 km) of the US Standard Atmosphere 1976:
+ * rho = 1.225 (1 - 2.25577e-5 h)^4.2559, h geopotential [m] (close enough to geometric here).
+ */
+function density(h) {
+  return 1.225 * (1 - 2.25577e-5 * h) ** 4.2559;
+}
+
+/** Round to 6 significant digits: keeps the file small, far below any modal sensitivity. */
+function r6(x) {
+  return x === 0 ? 0 : Number(x.toPrecision(6));
+}
+
+function pickPhase(u) {
+  let acc = 0;
+  for (const p of PHASES) {
+    acc += p.share;
+    if (u < acc) return p;
+  }
+  return PHASES[PHASES.length - 1];
+}
+
+/** One condition: stability-axis small-perturbation model, theta0 = 0, Ixz = 0. */
+function makeCondition(index, rand) {
+  const phase = pickPhase(rand());
+  const within = ([lo, hi]) => lo + (hi - lo) * rand();
+  const jitter = (x, spread = 0.08) => x * (1 + spread * (2 * rand() - 1));
+
+  const u0 = within(phase.v);
+  const h = within(phase.h);
+  const m = TERN.mass * within([0.82, 1.04]);
+  const { S, cbar, b } = TERN;
+  const Ix = TERN.Ix * (m / TERN.mass);
+  const Iy = TERN.Iy * (m / TERN.mass);
+  const Iz = TERN.Iz * (m / TERN.mass);
+  const qbar = 0.5 * density(h) * u0 * u0;
+
+  // Trim lift and drag; the aft centre of gravity weakens Cm_alpha.
+  const CL = (m * G) / (qbar * S);
+  const CD = phase.CD0 + 0.041 * CL * CL;
+  const CLa = jitter(phase.CLa, 0.04);
+  const CDa = 2 * 0.041 * CL * CLa;
+  const Cma = -within([0.45, 1.15]);
+  const Cmad = jitter(-5.2);
+  const Cmq = jitter(-17);
+  const CYb = jitter(-0.78);
+  const Clb = jitter(phase.Clb);
+  const Clp = jitter(-0.5);
+  const Clr = jitter(0.035 + 0.2 * CL);
+  const Cnb = jitter(0.125);
+  const Cnp = jitter(-0.012 - 0.09 * CL);
+  const Cnr = jitter(-0.19);
+
+  const k = qbar * S;
+  // Turboprop: at constant power the thrust falls as speed rises, which adds about one CD to
+  // the drag-speed term (common practice, from memory): Xu = -3 CD qS / (m u0).
+  const Xu = -(3 * CD * k) / (m * u0);
+  const Xw = -((CDa - CL) * k) / (m * u0);
+  const Zu = -(2 * CL * k) / (m * u0);
+  const Zw = -((CLa + CD) * k) / (m * u0);
+  const Mw = (Cma * k * cbar) / (u0 * Iy);
+  const Mwd = (Cmad * (cbar / (2 * u0)) * k * cbar) / (u0 * Iy);
+  const Mq = (Cmq * (cbar / (2 * u0)) * k * cbar) / Iy;
+
+  const Yv = (CYb * k) / (m * u0);
+  const Lv = (Clb * k * b) / (u0 * Ix);
+  const Lp = (Clp * (b / (2 * u0)) * k * b) / Ix;
+  const Lr = (Clr * (b / (2 * u0)) * k * b) / Ix;
+  const Nv = (Cnb * k * b) / (u0 * Iz);
+  const Np = (Cnp * (b / (2 * u0)) * k * b) / Iz;
+  const Nr = (Cnr * (b / (2 * u0)) * k * b) / Iz;
+
+  // Rows and columns in the order of `states` below.
+  const A = [
+    [Xu, Xw, 0, -G, 0, 0, 0, 0],
+    [Zu, Zw, u0, 0, 0, 0, 0, 0],
+    [Mwd * Zu, Mw + Mwd * Zw, Mq + Mwd * u0, 0, 0, 0, 0, 0],
+    [0, 0, 1, 0, 0, 0, 0, 0],
+    [0, 0, 0, 0, Yv, 0, -u0, G],
+    [0, 0, 0, 0, Lv, Lp, Lr, 0],
+    [0, 0, 0, 0, Nv, Np, Nr, 0],
+    [0, 0, 0, 0, 0, 1, 0, 0],
+  ].map((row) => row.map(r6));
+
+  return {
+    id: `${phase.code}-${String(index + 1).padStart(5, '0')}`,
+    phase: phase.code,
+    airspeed: r6(u0),
+    altitude: Math.round(h),
+    stateSpace: { states: ['u', 'w', 'q', 'theta', 'v', 'p', 'r', 'phi'], A },
+  };
+}
+
+/** The whole model file as an object. */
+export function makeSweep({ count = 10000, seed = 20261 } = {}) {
+  const rand = generator(seed);
+  const conditions = [];
+  for (let i = 0; i < count; i++) conditions.push(makeCondition(i, rand));
+  return {
+    format: 'modalgate-model/1',
+    aircraft: { name: TERN.name, class: TERN.class },
+    units: 'SI',
+    conditions,
+  };
+}
+
+/** JSON with one condition per line: compact, yet a diff or an error place stays readable. */
+export function sweepText(model) {
+  const head = JSON.stringify({ ...model, conditions: [] }).replace(/"conditions":\[\]\}$/, '"conditions":[\n');
+  return `${head}${model.conditions.map((c) => JSON.stringify(c)).join(',\n')}\n]}\n`;
+}
+
+export function writeSweep(file, options) {
+  const text = sweepText(makeSweep(options));
+  writeFileSync(file, text);
+  return { file, bytes: Buffer.byteLength(text) };
+}
+
+function parseArgs(argv) {
+  const out = { count: 10000, seed: 20261, out: 'sweep.json' };
+  for (let i = 0; i < argv.length; i++) {
+    const key = argv[i];
+    const value = argv[i + 1];
+    if (key === '--count') out.count = Number(value);
+    else if (key === '--seed') out.seed = Number(value);
+    else if (key === '--out') out.out = value;
+    else throw new Error(`make-sweep: unknown option ${key} (use --count N --seed S --out FILE)`);
+    i += 1;
+  }
+  if (!Number.isInteger(out.count) || out.count < 1) throw new Error('make-sweep: --count must be a whole number >= 1');
+  if (!Number.isInteger(out.seed)) throw new Error('make-sweep: --seed must be a whole number');
+  return out;
+}
+
+if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) {
+  const args = parseArgs(process.argv.slice(2));
+  const { file, bytes } = writeSweep(args.out, args);
+  console.log(`wrote ${file}: ${args.count} conditions, ${(bytes / 1e6).toFixed(1)} MB (seed ${args.seed})`);
+}

@@ -1,0 +1,240 @@
+#!/usr/bin/env python3
+"""Timing reference for the sweep benchmark, in Python 3 with numpy.
+
+This is a timing reference, not a second implementation of the criteria: it does roughly the
+work of `modalgate check model.json --json out.json` on the sweep file (read the JSON model,
+eigen-analysis of every condition, modal figures, a handful of boundary checks for one aircraft
+class, write a JSON file) the way a careful hand script would, with numpy doing the eigen work
+batched over a stacked (N, 8, 8) array. Its numbers are not meant to agree with modalgate's
+findings digit for digit, and modalgate never reads its output.
+
+    python3 bench/reference/modal_reference.py model.json out.json
+
+Only state-space conditions with the eight states u, w, q, theta, v, p, r, phi (any order) are
+analysed; any other condition is listed as skipped. Units are SI; no US unit conversion here.
+"""
+import json
+import math
+import sys
+
+import numpy as np
+
+STATES = ["u", "w", "q", "theta", "v", "p", "r", "phi"]
+LONGITUDINAL = np.array([1, 1, 1, 1, 0, 0, 0, 0], dtype=bool)
+G = 9.80665  # [m/s^2]
+LN2 = math.log(2.0)
+
+# Category by phase code (MIL-F-8785C 1.5; only the codes the sweep uses).
+CATEGORY = {"CR": "B", "CL": "B", "PA": "C"}
+
+# Boundaries for Class II-L by category: per level (min, max), None = no bound.
+# Sources: MIL-F-8785C 3.2.2.1.2 (short-period damping, from memory), 3.2.2.1.1 (CAP, from
+# memory), 3.2.1.2 (phugoid, from memory), 3.3.1.1 (Dutch roll), 3.3.1.2 (roll-mode time
+# constant), 3.3.1.3 (spiral time to double).
+BOUNDS = {
+    ("short_period", "damping_ratio"): {
+        "B": [(0.30, 2.00), (0.20, 2.00), (0.15, None)],
+        "C": [(0.35, 1.30), (0.25, 2.00), (0.15, None)],
+    },
+    ("short_period", "cap"): {
+        "B": [(0.085, 3.6), (0.038, 10.0), (None, None)],
+        "C": [(0.16, 3.6), (0.096, 10.0), (None, None)],
+    },
+    ("phugoid", "damping_ratio"): {
+        "B": [(0.04, None), (0.0, None), (None, None)],
+        "C": [(0.04, None), (0.0, None), (None, None)],
+    },
+    ("dutch_roll", "damping_ratio"): {
+        "B": [(0.08, None), (0.02, None), (0.0, None)],
+        "C": [(0.08, None), (0.02, None), (0.0, None)],
+    },
+    ("dutch_roll", "damping_frequency_product"): {
+        "B": [(0.15, None), (0.05, None), (None, None)],
+        "C": [(0.15, None), (0.05, None), (None, None)],
+    },
+    ("dutch_roll", "natural_frequency"): {
+        "B": [(0.4, None), (0.4, None), (0.4, None)],
+        "C": [(0.4, None), (0.4, None), (0.4, None)],
+    },
+    ("roll", "time_constant"): {
+        "B": [(None, 1.4), (None, 3.0), (None, 10.0)],
+        "C": [(None, 1.4), (None, 3.0), (None, 10.0)],
+    },
+    ("spiral", "time_to_double"): {
+        "B": [(20.0, None), (12.0, None), (4.0, None)],
+        "C": [(20.0, None), (12.0, None), (4.0, None)],
+    },
+}
+MARGINAL = 0.10  # fraction of the boundary (modalgate's default band)
+
+
+def load(path):
+    with open(path, "r", encoding="utf-8") as f:
+        model = json.load(f)
+    rows, kept, skipped = [], [], []
+    for c in model["conditions"]:
+        ss = c.get("stateSpace")
+        if not ss or sorted(ss["states"]) != sorted(STATES):
+            skipped.append(c["id"])
+            continue
+        order = [ss["states"].index(s) for s in STATES]
+        a = np.asarray(ss["A"], dtype=float)[np.ix_(order, order)]
+        rows.append(a)
+        kept.append(c)
+    return model, np.stack(rows) if rows else np.zeros((0, 8, 8)), kept, skipped
+
+
+def analyse(a):
+    """Batched eigen-analysis; participation p_ij = |w_ji v_ij| (left x right eigenvectors)."""
+    values, right = np.linalg.eig(a)
+    left = np.linalg.inv(right)
+    participation = np.abs(np.transpose(left, (0, 2, 1)) * right)  # (N, state, mode)
+    participation /= participation.sum(axis=1, keepdims=True)
+    long_share = participation[:, LONGITUDINAL, :].sum(axis=1)  # (N, mode)
+    return values, long_share
+
+
+def figures(lam):
+    re, im = lam.real, abs(lam.imag)
+    wn = abs(lam)
+    out = {
+        "eigenvalues": [{"re": re, "im": im}] if im > 0 else [{"re": re, "im": 0.0}],
+        "naturalFrequency": wn,
+        "dampingRatio": (-re / wn) if wn > 0 and im > 0 else None,
+        "timeConstant": (-1.0 / re) if im == 0 and re != 0 else None,
+        "timeToHalf": (LN2 / -re) if re < 0 else None,
+        "timeToDouble": (LN2 / re) if re > 0 else None,
+    }
+    if im == 0:
+        out["naturalFrequency"] = None
+    return out
+
+
+def identify(values, long_share):
+    """Name the modes of one condition: by block (participation), then by frequency."""
+    modes = []
+    tol = 1e-9
+    for block, is_long in (("long", True), ("lat", False)):
+        sel = [(lam, s) for lam, s in zip(values, long_share) if (s > 0.5) == is_long]
+        pairs = sorted([lam for lam, _ in sel if lam.imag > tol], key=abs)
+        reals = sorted([lam for lam, _ in sel if abs(lam.imag) <= tol], key=abs)
+        if is_long:
+            if len(pairs) == 2:
+                modes.append(("phugoid", pairs[0]))
+                modes.append(("short_period", pairs[1]))
+            else:
+                modes.extend(("other", lam) for lam in pairs + reals)
+        else:
+            if pairs:
+                modes.append(("dutch_roll", pairs[-1]))
+                modes.extend(("other", lam) for lam in pairs[:-1])
+            if len(reals) >= 2:
+                modes.append(("spiral", reals[0]))
+                modes.append(("roll", reals[-1]))
+                modes.extend(("other", lam) for lam in reals[1:-1])
+            else:
+                modes.extend(("other", lam) for lam in reals)
+    return modes
+
+
+def level_of(value, levels):
+    for i, (lo, hi) in enumerate(levels):
+        if (lo is None or value >= lo) and (hi is None or value <= hi):
+            return i + 1
+    return None
+
+
+def check(kind, quantity, value, category, required=1):
+    levels = BOUNDS[(kind, quantity)][category]
+    if value is None:
+        return {"verdict": "not_evaluated", "level": None, "margin": None}
+    level = level_of(value, levels)
+    lo, hi = levels[required - 1]
+    margins = [m for m in ((value - lo) if lo is not None else None, (hi - value) if hi is not None else None) if m is not None]
+    margin = min(margins) if margins else None
+    if level is None or level > required:
+        verdict = "fail"
+    else:
+        edge = lo if lo is not None and (hi is None or value - lo <= hi - value) else hi
+        band = MARGINAL * abs(edge) if edge not in (None, 0) else 0.01
+        verdict = "marginal" if margin is not None and margin < band else "pass"
+    return {"verdict": verdict, "level": level, "margin": margin}
+
+
+def evaluate(condition, modes):
+    category = CATEGORY.get(condition["phase"])
+    by_kind = {kind: f for kind, f in modes}
+    findings = []
+
+    def add(kind, quantity, value):
+        if category is None:
+            return
+        r = check(kind, quantity, value, category)
+        findings.append({"mode": kind, "quantity": quantity, "value": value, **r})
+
+    sp = by_kind.get("short_period")
+    if sp:
+        add("short_period", "damping_ratio", sp["dampingRatio"])
+        n_alpha = condition["_nAlpha"]
+        add("short_period", "cap", sp["naturalFrequency"] ** 2 / n_alpha if n_alpha > 0 else None)
+    ph = by_kind.get("phugoid")
+    add("phugoid", "damping_ratio", ph["dampingRatio"] if ph else None)
+    dr = by_kind.get("dutch_roll")
+    add("dutch_roll", "damping_ratio", dr["dampingRatio"] if dr else None)
+    add("dutch_roll", "damping_frequency_product", dr["dampingRatio"] * dr["naturalFrequency"] if dr else None)
+    add("dutch_roll", "natural_frequency", dr["naturalFrequency"] if dr else None)
+    roll = by_kind.get("roll")
+    add("roll", "time_constant", roll["timeConstant"] if roll else None)
+    spiral = by_kind.get("spiral")
+    if spiral:
+        t2 = spiral["timeToDouble"]
+        # A convergent spiral never doubles: it meets every level. JSON has no infinity, so
+        # the finding carries null as its value, as modalgate's results writer does.
+        if t2 is None:
+            findings.append({"mode": "spiral", "quantity": "time_to_double", "value": None, "verdict": "pass", "level": 1, "margin": None})
+        else:
+            add("spiral", "time_to_double", t2)
+    return findings
+
+
+def main(argv):
+    if len(argv) != 3:
+        print("usage: modal_reference.py MODEL.json OUT.json", file=sys.stderr)
+        return 2
+    model, a, kept, skipped = load(argv[1])
+    values, long_share = analyse(a)
+    # n/alpha = -V Z_w / g [g/rad], from the w row of A (column 1 of the canonical order).
+    n_alpha = -np.array([c["airspeed"] for c in kept]) * a[:, 1, 1] / G if len(kept) else np.zeros(0)
+
+    conditions = []
+    summary = {"pass": 0, "marginal": 0, "fail": 0, "not_evaluated": 0}
+    for k, c in enumerate(kept):
+        named = identify(values[k].tolist(), long_share[k].tolist())
+        modes = [(kind, figures(lam)) for kind, lam in named]
+        c["_nAlpha"] = float(n_alpha[k])
+        findings = evaluate(c, modes)
+        for f in findings:
+            summary[f["verdict"]] += 1
+        conditions.append({
+            "id": c["id"],
+            "phase": c["phase"],
+            "modes": [{"kind": kind, **f} for kind, f in modes],
+            "findings": findings,
+        })
+    out = {
+        "format": "modalgate-reference/1",
+        "note": "timing reference only, not a second implementation of the criteria",
+        "aircraft": model["aircraft"],
+        "summary": summary,
+        "skipped": skipped,
+        "conditions": conditions,
+    }
+    with open(argv[2], "w", encoding="utf-8") as f:
+        # Compact: with an indent, the json module falls back to its pure-Python encoder.
+        f.write(json.dumps(out, allow_nan=False))
+    print(f"reference: {len(conditions)} conditions, {summary}", file=sys.stderr)
+    return 0
+
+
+if __name__ == "__main__":
+    sys.exit(main(sys.argv))

@@ -1,0 +1,74 @@
+/**
+ * The pipeline, top to bottom: load the model -> build the linear model per condition ->
+ * analyse modes -> resolve criteria -> evaluate findings -> results. Writers (terminal, JSON,
+ * JUnit, HTML, PDF) take the results from here; nothing in this file prints or writes.
+ */
+import { InputError, type InputIssue } from './errors.js';
+import { loadCriteriaSet } from './load/criteria-file.js';
+import { parseModel } from './load/model-file.js';
+import { readInputFile } from './load/read-file.js';
+import { analyseModes } from './modes/analyse.js';
+import { evaluateCondition } from './criteria/evaluate.js';
+import { assembleCondition, assembleResults } from './results.js';
+import type { AircraftModel, InputFile, ResolvedCriteriaSet, Results } from './types.js';
+
+export interface CheckRequest {
+  /** path of the model file */
+  model: string;
+  /** criteria set paths or shipped ids; empty = modes only */
+  criteria: string[];
+  /** tool version, the command line and the run time, supplied by the caller (no clock here) */
+  toolVersion: string;
+  command: string[];
+  generatedAt: string;
+  /** called after each condition (for a progress bar); no effect on the results */
+  onProgress?: (done: number, total: number) => void;
+}
+
+export interface CheckOutcome {
+  model: AircraftModel;
+  sets: ResolvedCriteriaSet[];
+  results: Results;
+}
+
+export async function runCheck(request: CheckRequest): Promise<CheckOutcome> {
+  const modelFile = await readInputFile(request.model);
+  const model = parseModel(modelFile.text, modelFile.path);
+  const loaded = await Promise.all(request.criteria.map((ref) => loadCriteriaSet(ref)));
+  const sets = loaded.map((l) => l.set);
+
+  const issues: InputIssue[] = [];
+  const total = model.conditions.length;
+  const conditions = model.conditions.map((condition, index) => {
+    const analysis = analyseModes(condition.system, { airspeed: condition.airspeed });
+    const evaluations = sets.flatMap((set) => {
+      try {
+        return [evaluateCondition({ aircraftClass: model.aircraft.class, condition, analysis, set })];
+      } catch (err) {
+        if (err instanceof InputError) issues.push(...err.issues);
+        else throw err;
+        return [];
+      }
+    });
+    request.onProgress?.(index + 1, total);
+    return assembleCondition(condition, analysis, evaluations);
+  });
+  if (issues.length > 0) throw new InputError(dedupeIssues(issues));
+
+  const inputs: InputFile[] = [
+    { role: 'model', path: modelFile.path, sha256: modelFile.sha256 },
+    ...loaded.flatMap((l) => l.files.map((f) => ({ role: 'criteria' as const, path: f.path, sha256: f.sha256 }))),
+  ];
+  const results = assembleResults({ request, model, sets, inputs, conditions });
+  return { model, sets, results };
+}
+
+function dedupeIssues(issues: InputIssue[]): InputIssue[] {
+  const seen = new Set<string>();
+  return issues.filter((i) => {
+    const key = `${i.file}:${i.line}:${i.column}:${i.field}:${i.message}`;
+    if (seen.has(key)) return false;
+    seen.add(key);
+    return true;
+  });
+}

@@ -1,0 +1,196 @@
+/**
+ * The command line: turns arguments into one library call and the result into output and an
+ * exit code. The only module that prints or sets the exit code.
+ * Exit codes: 0 nothing failed; 1 a finding failed (or was marginal under --fail-on marginal);
+ * 2 bad input or usage; 3 internal error.
+ */
+import { readFileSync } from 'node:fs';
+import path from 'node:path';
+import { Command, CommanderError, Option } from 'commander';
+import { runCheck, type CheckOutcome } from './check.js';
+import { compareResults } from './compare/compare-results.js';
+import { formatComparisonText } from './compare/format-comparison.js';
+import { parseBaselineResults } from './compare/compare-results.js';
+import { formatCriteriaSetText } from './report/criteria-text.js';
+import { InputError } from './errors.js';
+import { loadCriteriaSet } from './load/criteria-file.js';
+import { readInputFile } from './load/read-file.js';
+import { renderOutputs, writeArtifacts, type OutputRequest } from './outputs.js';
+import { formatResultsText } from './report/terminal.js';
+import { progressReporter } from './progress.js';
+
+export const DEFAULT_CRITERIA = 'mil-f-8785c';
+
+export const EXIT = { ok: 0, findingFailed: 1, badInput: 2, internal: 3 } as const;
+
+interface Io {
+  out: (text: string) => void;
+  err: (text: string) => void;
+  color: boolean;
+  now: () => Date;
+}
+
+function defaultIo(): Io {
+  return {
+    out: (t) => process.stdout.write(`${t}\n`),
+    err: (t) => process.stderr.write(`${t}\n`),
+    color: Boolean(process.stdout.isTTY) && !('NO_COLOR' in process.env) && process.env.TERM !== 'dumb',
+    now: () => new Date(),
+  };
+}
+
+export function toolVersion(): string {
+  const pkg = JSON.parse(readFileSync(new URL('../package.json', import.meta.url), 'utf8')) as { version: string };
+  return pkg.version;
+}
+
+export async function main(argv: string[], io: Io = defaultIo()): Promise<number> {
+  let exitCode: number = EXIT.ok;
+  const program = new Command('modalgate')
+    .description('Check an aircraft linear model\'s dynamic modes against handling-qualities criteria.')
+    .version(toolVersion())
+    .exitOverride()
+    .configureOutput({ writeOut: (s) => io.out(s.trimEnd()), writeErr: (s) => io.err(s.trimEnd()) })
+    .showHelpAfterError();
+
+  program
+    .command('check')
+    .description('identify the modes, evaluate the criteria and write the review document')
+    .argument('<model>', 'model file (modalgate-model/1, YAML or JSON)')
+    .option('--criteria <set>', 'criteria file or shipped set id (repeatable; default: mil-f-8785c)', collect, [])
+    .option('--html <file>', 'write the HTML review document')
+    .option('--pdf <file>', 'write the PDF review document (needs Chromium)')
+    .option('--json <file>', 'write results JSON (modalgate-results/1)')
+    .option('--junit <file>', 'write JUnit XML, one test case per condition and criterion')
+    .option('--baseline <results.json>', 'compare with the results of an earlier run')
+    .addOption(new Option('--fail-on <verdict>', 'lowest verdict that makes the exit code 1').choices(['fail', 'marginal']).default('fail'))
+    .addOption(new Option('--paper <size>', 'PDF paper size').choices(['A4', 'Letter']).default('A4'))
+    .option('--browser <path>', 'Chromium or Chrome executable for the PDF')
+    .addOption(new Option('--detail <which>', 'per-condition detail: all, issues (fail/marginal only) or none').choices(['all', 'issues', 'none']))
+    .action(async (modelPath: string, opts: CheckCommandOptions) => {
+      exitCode = await checkCommand(modelPath, opts, argv, io);
+    });
+
+  program
+    .command('modes')
+    .description('identify the modes and print their figures (no criteria)')
+    .argument('<model>', 'model file (modalgate-model/1, YAML or JSON)')
+    .option('--json <file>', 'write results JSON (modes only, no findings)')
+    .action(async (modelPath: string, opts: { json?: string }) => {
+      const outcome = await runCheck({ model: modelPath, criteria: [], ...runContext(argv, io) });
+      io.out(formatResultsText(outcome.results, { color: io.color, detail: 'all', findings: false }));
+      await writeAndTell(outcome, { ...(opts.json ? { json: opts.json } : {}), paper: 'A4', failOn: 'fail', detail: 'all' }, io);
+    });
+
+  const criteria = program.command('criteria').description('inspect criteria files');
+  criteria
+    .command('show')
+    .argument('<file>', 'criteria file or shipped set id')
+    .description('print the resolved criteria set (after extends and overrides) as a table')
+    .action(async (file: string) => {
+      const { set } = await loadCriteriaSet(file);
+      io.out(formatCriteriaSetText(set));
+    });
+  criteria
+    .command('check')
+    .argument('<file>', 'criteria file or shipped set id')
+    .description('validate a criteria file and its extends chain')
+    .action(async (file: string) => {
+      const { set, files } = await loadCriteriaSet(file);
+      io.out(`${file}: valid; set ${set.id} (${set.chain.join(' > ')}), ${set.criteria.length} criteria, ${set.dropped.length} dropped, ${files.length} file(s)`);
+    });
+
+  try {
+    await program.parseAsync(argv, { from: 'user' });
+    return exitCode;
+  } catch (err) {
+    return reportError(err, io);
+  }
+}
+
+interface CheckCommandOptions {
+  criteria: string[];
+  html?: string;
+  pdf?: string;
+  json?: string;
+  junit?: string;
+  baseline?: string;
+  failOn: 'fail' | 'marginal';
+  paper: 'A4' | 'Letter';
+  browser?: string;
+  detail?: 'all' | 'issues' | 'none';
+}
+
+async function checkCommand(modelPath: string, opts: CheckCommandOptions, argv: string[], io: Io): Promise<number> {
+  const criteria = opts.criteria.length > 0 ? opts.criteria : [DEFAULT_CRITERIA];
+  if (opts.criteria.length === 0) io.out(`no --criteria given: using the shipped set ${DEFAULT_CRITERIA}`);
+  // Read the baseline before any work, so a bad baseline is reported at once.
+  const baseline = opts.baseline ? await readInputFile(opts.baseline) : undefined;
+  const progress = progressReporter();
+  const outcome = await runCheck({ model: modelPath, criteria, ...runContext(argv, io), onProgress: progress.onProgress }).finally(
+    progress.stop,
+  );
+  if (baseline) outcome.results.inputs.push({ role: 'baseline', path: baseline.path, sha256: baseline.sha256 });
+  const comparison = baseline ? compareResults(outcome.results, parseBaselineResults(baseline.text, baseline.path)) : undefined;
+
+  const large = outcome.results.conditions.length > 50;
+  const detail = opts.detail ?? (large ? 'issues' : 'all');
+  if (!opts.detail && large) io.out(`${outcome.results.conditions.length} conditions: per-condition detail limited to conditions with issues (--detail all to list every one)`);
+
+  const wantsFile = Boolean(opts.html || opts.pdf || opts.json || opts.junit);
+  const html = opts.html ?? (wantsFile ? undefined : defaultHtmlPath(modelPath));
+  io.out(formatResultsText(outcome.results, { color: io.color, detail, findings: true }));
+  if (comparison) io.out(`\n${formatComparisonText(comparison, { color: io.color })}`);
+
+  const request: OutputRequest = {
+    ...(html ? { html } : {}),
+    ...(opts.pdf ? { pdf: opts.pdf } : {}),
+    ...(opts.json ? { json: opts.json } : {}),
+    ...(opts.junit ? { junit: opts.junit } : {}),
+    ...(opts.browser ? { browser: opts.browser } : {}),
+    ...(comparison ? { comparison } : {}),
+    paper: opts.paper,
+    failOn: opts.failOn,
+    detail,
+  };
+  await writeAndTell(outcome, request, io);
+
+  const s = outcome.results.summary;
+  if (s.fail > 0 || (opts.failOn === 'marginal' && s.marginal > 0)) return EXIT.findingFailed;
+  return EXIT.ok;
+}
+
+async function writeAndTell(outcome: CheckOutcome, request: OutputRequest, io: Io): Promise<void> {
+  const artifacts = await renderOutputs(outcome, request);
+  await writeArtifacts(artifacts);
+  for (const a of artifacts) io.out(`wrote ${a.kind.toUpperCase()} ${a.path}`);
+}
+
+function runContext(argv: string[], io: Io) {
+  return { toolVersion: toolVersion(), command: ['modalgate', ...argv], generatedAt: io.now().toISOString() };
+}
+
+function defaultHtmlPath(modelPath: string): string {
+  const parsed = path.parse(modelPath);
+  return path.join(parsed.dir, `${parsed.name}.review.html`);
+}
+
+function collect(value: string, previous: string[]): string[] {
+  return [...previous, value];
+}
+
+function reportError(err: unknown, io: Io): number {
+  if (err instanceof CommanderError) {
+    if (err.code === 'commander.helpDisplayed' || err.code === 'commander.version' || err.code === 'commander.help') return EXIT.ok;
+    return EXIT.badInput;
+  }
+  if (err instanceof InputError) {
+    io.err(err.message);
+    io.err(`modalgate: ${err.issues.length} problem(s) in the input; nothing was written`);
+    return EXIT.badInput;
+  }
+  const e = err as Error;
+  io.err(`modalgate: internal error: ${e?.stack ?? String(err)}`);
+  io.err('this is a bug in modalgate; nothing was written');
+  return EXIT.internal;
+}

@@ -1,0 +1,192 @@
+/**
+ * Evaluate one flight condition against a resolved criteria set: phase -> category, required
+ * level, then one finding per applicable criterion and matching mode. Pure.
+ */
+import { InputError } from '../errors.js';
+import type {
+  AircraftClass,
+  Category,
+  Finding,
+  FlightCondition,
+  Level,
+  ModalAnalysis,
+  Mode,
+  ResolvedCriteriaSet,
+  ResolvedCriterion,
+} from '../types.js';
+import { evaluators } from './evaluators.js';
+import { expandLevels } from './level-bounds.js';
+import { judge } from './verdict.js';
+
+export interface ConditionEvaluation {
+  category: Category | null;
+  requiredLevel: Level;
+  requiredLevelFrom: 'model' | 'criteria default';
+  findings: Finding[];
+  warnings: string[];
+}
+
+export function evaluateCondition(input: {
+  aircraftClass: AircraftClass;
+  condition: FlightCondition;
+  analysis: ModalAnalysis;
+  set: ResolvedCriteriaSet;
+}): ConditionEvaluation {
+  const { aircraftClass, condition, analysis, set } = input;
+  const category = set.phaseCategories[condition.phase];
+  if (category === undefined) {
+    const known = Object.keys(set.phaseCategories);
+    throw new InputError([
+      {
+        ...condition.place,
+        field: 'phase',
+        message: `condition '${condition.id}': flight phase '${condition.phase}' has no category in criteria set '${set.id}'`,
+        expected: known.length > 0 ? known.join(' | ') : 'a phase listed under phaseCategories of the criteria set',
+        found: JSON.stringify(condition.phase),
+        code: 'unknown_phase',
+      },
+    ]);
+  }
+  const requiredLevel = condition.requiredLevel ?? set.defaultRequiredLevel;
+  const requiredLevelFrom = condition.requiredLevel !== null ? 'model' : 'criteria default';
+  const warnings: string[] = [];
+  const findings: Finding[] = [];
+
+  for (const criterion of set.criteria) {
+    if (!selects(criterion, aircraftClass, category, condition.phase)) continue;
+    const altitude = altitudeApplies(criterion, condition);
+    if (altitude === 'outside') continue;
+    const base = baseFinding(criterion);
+    if (altitude === 'unknown') {
+      findings.push({ ...base, reason: `the criterion applies by altitude and condition '${condition.id}' gives no altitude` });
+      continue;
+    }
+    const modes = analysis.modes.filter((m) => m.kind === criterion.mode);
+    if (modes.length === 0) {
+      findings.push({ ...base, reason: absentModeReason(criterion, analysis) });
+      continue;
+    }
+    if (modes.length > 1) {
+      warnings.push(`${modes.length} modes identified as ${criterion.mode}: criterion ${criterion.id} is evaluated for each`);
+    }
+    for (const mode of modes) findings.push(evaluateOne({ criterion, mode, condition, analysis, aircraftClass, requiredLevel, set }));
+  }
+  warnings.push(...uncoveredModes(set, analysis, aircraftClass, category, condition.phase));
+  return { category, requiredLevel, requiredLevelFrom, findings, warnings };
+}
+
+/**
+ * A dynamic mode that no applicable criterion looks at is said out loud (e.g. a coupled
+ * roll-spiral oscillation in a Category A phase), so that silence is never read as a pass.
+ */
+function uncoveredModes(
+  set: ResolvedCriteriaSet,
+  analysis: ModalAnalysis,
+  aircraftClass: AircraftClass,
+  category: Category,
+  phase: string,
+): string[] {
+  const covered = new Set(set.criteria.filter((c) => selects(c, aircraftClass, category, phase)).map((c) => c.mode));
+  const kinds = [...new Set(analysis.modes.map((m) => m.kind))].filter((k) => k !== 'kinematic' && k !== 'other');
+  return kinds
+    .filter((k) => !covered.has(k))
+    .map((k) => `no criterion of set '${set.id}' applies to the ${k} mode in Category ${category} (phase ${phase}): it is not checked`);
+}
+
+function selects(c: ResolvedCriterion, aircraftClass: AircraftClass, category: Category, phase: string): boolean {
+  const { classes, categories, phases } = c.applies;
+  return (
+    (classes === undefined || classes.includes(aircraftClass)) &&
+    (categories === undefined || categories.includes(category)) &&
+    (phases === undefined || phases.includes(phase))
+  );
+}
+
+function altitudeApplies(c: ResolvedCriterion, condition: FlightCondition): 'inside' | 'outside' | 'unknown' {
+  const band = c.applies.altitude;
+  if (band === undefined) return 'inside';
+  if (condition.altitude === null) return 'unknown';
+  if (band.below !== undefined && !(condition.altitude < band.below)) return 'outside';
+  if (band.atOrAbove !== undefined && !(condition.altitude >= band.atOrAbove)) return 'outside';
+  return 'inside';
+}
+
+function absentModeReason(c: ResolvedCriterion, analysis: ModalAnalysis): string {
+  const written = c.params['ifModeAbsent'];
+  if (typeof written === 'string') return written;
+  const coupled = analysis.modes.some((m) => m.kind === 'roll_spiral');
+  if (coupled && (c.mode === 'roll' || c.mode === 'spiral')) {
+    return `no ${c.mode} mode: the roll and spiral roots form a coupled roll-spiral oscillation (see the roll-spiral criterion)`;
+  }
+  return `no ${c.mode} mode identified in this condition`;
+}
+
+/** A finding with nothing evaluated yet: not_evaluated until a value says otherwise. */
+function baseFinding(c: ResolvedCriterion): Finding {
+  return {
+    criterion: c.id,
+    set: c.set,
+    title: c.title,
+    mode: c.mode,
+    quantity: c.quantity,
+    value: null,
+    unit: evaluators[c.quantity].unit,
+    level: null,
+    verdict: 'not_evaluated',
+    margin: null,
+    bounds: expandLevels(c.levels),
+    source: c.source,
+    confidence: c.confidence,
+    reason: '',
+  };
+}
+
+function evaluateOne(args: {
+  criterion: ResolvedCriterion;
+  mode: Mode;
+  condition: FlightCondition;
+  analysis: ModalAnalysis;
+  aircraftClass: AircraftClass;
+  requiredLevel: Level;
+  set: ResolvedCriteriaSet;
+}): Finding {
+  const { criterion, mode, requiredLevel, set } = args;
+  const row = evaluators[criterion.quantity];
+  const result = row.evaluate(mode, args);
+  const bounds = expandLevels(result.adjustedBounds ?? criterion.levels);
+  const ambiguity = mode.ambiguous ? ' (mode identification not clear-cut)' : '';
+  const finding: Finding = {
+    ...baseFinding(criterion),
+    bounds,
+    ...(result.method !== undefined ? { method: result.method } : {}),
+  };
+  const divergentDamping = row.damping && result.divergent === true;
+  const allowedFrom = criterion.params['divergenceAllowedFromLevel'];
+  const bestReachable: Level | null = divergentDamping ? (allowedFrom === 2 || allowedFrom === 3 ? allowedFrom : null) : 1;
+
+  if (result.value === null) {
+    if (divergentDamping && bestReachable === null) {
+      return { ...finding, verdict: 'fail', reason: `${result.reason ?? 'divergent mode'}: a divergent mode fails the damping criterion${ambiguity}` };
+    }
+    return { ...finding, reason: `${result.reason ?? 'no value'}${ambiguity}` };
+  }
+  const judgement = judge({
+    value: result.value,
+    bounds,
+    requiredLevel,
+    quantity: criterion.quantity,
+    band: set.marginalBand,
+    strict: criterion.params['strictBounds'] === true,
+    bestReachable,
+  });
+  const divergence = divergentDamping ? '; divergent mode (a root with Re > 0)' : '';
+  const infinite = Number.isFinite(result.value) ? '' : '; the value is unbounded';
+  return {
+    ...finding,
+    value: Number.isFinite(result.value) ? result.value : null,
+    level: judgement.level,
+    verdict: judgement.verdict,
+    margin: judgement.margin,
+    reason: `${judgement.reason}${divergence}${infinite}${ambiguity}`,
+  };
+}

@@ -1,0 +1,177 @@
+/**
+ * The evaluator table: one row per bounded quantity. A row turns a mode (with its condition
+ * and criterion) into the value to hold against the criterion's bounds. Adding a kind of
+ * check adds a row here and a name to `Quantity` in src/types.ts.
+ */
+import type { AircraftClass, FlightCondition, LevelBounds, ModalAnalysis, Mode, Quantity, ResolvedCriterion } from '../types.js';
+import {
+  controlAnticipation,
+  dampingFrequencyProduct,
+  isDivergent,
+  rollToSideslip,
+  timeToDouble,
+} from './derived-figures.js';
+import { expandLevels, LEVELS, levelKey } from './level-bounds.js';
+
+export interface EvaluatorContext {
+  aircraftClass: AircraftClass;
+  condition: FlightCondition;
+  analysis: ModalAnalysis;
+  criterion: ResolvedCriterion;
+}
+
+export interface Evaluation {
+  /** [SI unit of the quantity]; null when it cannot be had (then `reason` says why) */
+  value: number | null;
+  method?: string;
+  reason?: string;
+  /** bounds changed by a rule of the criterion (e.g. the |phi/beta| rise of 3.3.1.1) */
+  adjustedBounds?: LevelBounds;
+  /** the mode has a root with Re > 0 */
+  divergent?: boolean;
+}
+
+export interface EvaluatorRow {
+  /** SI unit of the quantity, as shown */
+  unit: string;
+  /** a damping figure: a divergent mode fails it whatever the value */
+  damping: boolean;
+  evaluate(mode: Mode, context: EvaluatorContext): Evaluation;
+}
+
+export const evaluators: Record<Quantity, EvaluatorRow> = {
+  damping_ratio: {
+    unit: '-',
+    damping: true,
+    evaluate: (mode) => {
+      const divergent = isDivergent(mode);
+      if (mode.dampingRatio === null) {
+        return divergent
+          ? { value: null, divergent, reason: 'divergent: real roots of opposite sign, no damping ratio' }
+          : { value: null, reason: 'the mode has no damping ratio' };
+      }
+      return { value: mode.dampingRatio, divergent };
+    },
+  },
+
+  natural_frequency: {
+    unit: 'rad/s',
+    damping: false,
+    evaluate: (mode) =>
+      mode.naturalFrequency === null
+        ? { value: null, reason: 'the mode has no natural frequency (real roots of opposite sign)' }
+        : { value: mode.naturalFrequency },
+  },
+
+  cap: {
+    unit: '1/(s^2 g)',
+    damping: false,
+    evaluate: (mode, { condition }) => {
+      const cap = controlAnticipation(mode, condition);
+      return cap.value === null ? { value: null, reason: cap.reason } : { value: cap.value, method: cap.method };
+    },
+  },
+
+  damping_frequency_product: {
+    unit: 'rad/s',
+    damping: true,
+    evaluate: (mode, context) => {
+      const divergent = isDivergent(mode);
+      const product = dampingFrequencyProduct(mode);
+      if (product.value === null) return { value: null, divergent, reason: product.reason };
+      const adjusted = adjustForRollToSideslip(mode, context);
+      if (adjusted && 'reason' in adjusted) return { value: null, divergent, reason: adjusted.reason };
+      const capped = capDampingRatio(mode, context, adjusted?.bounds ?? context.criterion.levels);
+      const methods = [product.method, adjusted?.method, capped?.method].filter((m): m is string => m !== undefined);
+      return {
+        value: product.value,
+        divergent,
+        method: methods.join('; '),
+        ...(adjusted || capped ? { adjustedBounds: capped?.bounds ?? adjusted?.bounds } : {}),
+      };
+    },
+  },
+
+  time_to_double: {
+    unit: 's',
+    damping: false,
+    evaluate: (mode) => {
+      const t2 = timeToDouble(mode.eigenvalues);
+      return t2.value === null ? { value: null, reason: t2.reason } : { value: t2.value, method: t2.method };
+    },
+  },
+
+  time_constant: {
+    unit: 's',
+    damping: true,
+    evaluate: (mode) => {
+      const root = mode.eigenvalues.length === 1 ? mode.eigenvalues[0] : undefined;
+      if (!root || root.im !== 0) return { value: null, reason: 'the mode is not a single real root: no time constant' };
+      const divergent = root.re > 0;
+      // tau = -1/lambda (common practice); a root at 0 has no finite time constant.
+      const value = root.re === 0 ? Infinity : -1 / root.re;
+      return { value, divergent, method: 'tau = -1/lambda' };
+    },
+  },
+};
+
+/**
+ * MIL-F-8785C 3.3.1.1: where omega_n^2 |phi/beta| exceeds a threshold T (20 (rad/s)^2), the
+ * minimum zeta omega_n rises by k_L (omega_n^2 |phi/beta| - T), k_L per level from the params
+ * `phiBetaK1`, `phiBetaK2`, `phiBetaK3` and `phiBetaThreshold` (value from memory).
+ */
+function adjustForRollToSideslip(
+  mode: Mode,
+  { condition, criterion }: EvaluatorContext,
+): { bounds: LevelBounds; method: string } | { reason: string } | undefined {
+  const threshold = criterion.params['phiBetaThreshold'];
+  if (typeof threshold !== 'number') return undefined;
+  const omega = mode.naturalFrequency;
+  if (omega === null) return { reason: 'the mode has no natural frequency for the omega_n^2 |phi/beta| rule' };
+  const ratio = rollToSideslip(mode, condition.airspeed);
+  if (ratio.value === null) return { reason: `${ratio.reason} (needed for the omega_n^2 |phi/beta| rule of the criterion)` };
+  const excess = omega * omega * ratio.value - threshold;
+  if (excess <= 0) {
+    return { bounds: criterion.levels, method: `${ratio.method}; omega_n^2 |phi/beta| within ${threshold}: no rise of the minimum` };
+  }
+  const expanded = expandLevels(criterion.levels);
+  const bounds: LevelBounds = {};
+  for (const level of LEVELS) {
+    const key = levelKey(level);
+    const bound = { ...expanded[key] };
+    const k = criterion.params[`phiBetaK${level}`];
+    if (bound.min !== undefined && typeof k === 'number') bound.min += k * excess;
+    bounds[key] = bound;
+  }
+  return { bounds, method: `${ratio.method}; minimum raised by k (omega_n^2 |phi/beta| - ${threshold}) = k x ${excess.toPrecision(4)}` };
+}
+
+/**
+ * MIL-F-8785C 3.3.1.1 (value from memory): the governing damping is the larger of the zeta and
+ * zeta omega_n requirements, except that Class III need not exceed zeta = 0.7; so for the
+ * listed classes the zeta omega_n minimum is capped at zetaCap x omega_n.
+ */
+function capDampingRatio(
+  mode: Mode,
+  { aircraftClass, criterion }: EvaluatorContext,
+  levels: LevelBounds,
+): { bounds: LevelBounds; method: string } | undefined {
+  const cap = criterion.params['zetaCap'];
+  const classes = criterion.params['zetaCapClasses'];
+  const omega = mode.naturalFrequency;
+  if (typeof cap !== 'number' || typeof classes !== 'string' || omega === null) return undefined;
+  if (!classes.split(',').map((c) => c.trim()).includes(aircraftClass)) return undefined;
+  const expanded = expandLevels(levels);
+  const bounds: LevelBounds = {};
+  let changed = false;
+  for (const level of LEVELS) {
+    const key = levelKey(level);
+    const bound = { ...expanded[key] };
+    if (bound.min !== undefined && bound.min > cap * omega) {
+      bound.min = cap * omega;
+      changed = true;
+    }
+    bounds[key] = bound;
+  }
+  return changed ? { bounds, method: `Class ${aircraftClass}: minimum capped at zeta = ${cap} (zeta omega_n <= ${cap} omega_n)` } : undefined;
+}

@@ -1,0 +1,263 @@
+/**
+ * Resolve a chain of criteria files (root first, each extending the one before) into one
+ * ResolvedCriteriaSet: inherit, override by criterion id, drop with a reason, add. Pure: the
+ * files are read and validated in src/load/criteria-file.ts.
+ */
+import { InputError, describeFound, formatPath, type InputIssue } from '../errors.js';
+import { PROGRAMME_VALUE, type BoundInput, type CriterionInput, type OverrideInput } from '../load/criteria-schema.js';
+import type { Bound, Category, Level, LevelBounds, Quantity, ResolvedCriteriaSet, ResolvedCriterion } from '../types.js';
+import { expandLevels, LEVELS, levelKey, type LevelKey } from './level-bounds.js';
+import { DEFAULT_ABSOLUTE_BAND, DEFAULT_RELATIVE_BAND } from './marginal-band.js';
+import type { ParsedCriteriaFile } from './parsed-criteria-file.js';
+
+interface Origin {
+  file: ParsedCriteriaFile;
+  path: PropertyKey[];
+}
+
+/** A criterion while the chain is walked: bounds may still hold the programme placeholder. */
+interface Working {
+  criterion: Omit<ResolvedCriterion, 'levels'>;
+  levels: Partial<Record<LevelKey, BoundInput>>;
+  /** where each listed level was last written */
+  levelOrigin: Partial<Record<LevelKey, Origin>>;
+}
+
+export function resolveCriteriaChain(files: ParsedCriteriaFile[]): ResolvedCriteriaSet {
+  const leaf = files[files.length - 1];
+  if (!leaf) throw new InputError([{ file: '', field: '', message: 'no criteria file given', code: 'empty_chain' }]);
+  const issues: InputIssue[] = [];
+  const issueAt = (origin: Origin, message: string, code: string, found?: unknown): InputIssue => ({
+    file: origin.file.file,
+    ...(origin.file.locate(origin.path) ?? {}),
+    field: formatPath(origin.path),
+    message,
+    code,
+    ...(found !== undefined ? { found: describeFound(found) } : {}),
+  });
+
+  const working = new Map<string, Working>();
+  const dropped: ResolvedCriteriaSet['dropped'] = [];
+  const phaseCategories: Record<string, Category> = {};
+  const notes: string[] = [];
+  let requiredLevel: Level | undefined;
+  let relativeBand: number | undefined;
+  const absoluteBand: Partial<Record<Quantity, number>> = {};
+
+  for (const file of files) {
+    const data = file.data;
+    Object.assign(phaseCategories, data.phaseCategories ?? {});
+    if (data.requiredLevel !== undefined) requiredLevel = data.requiredLevel;
+    if (data.marginalBand?.relative !== undefined) relativeBand = data.marginalBand.relative;
+    for (const [q, band] of Object.entries(data.marginalBand?.absolute ?? {})) {
+      if (band !== undefined) absoluteBand[q as Quantity] = band;
+    }
+    if (data.notes !== undefined && data.notes.trim() !== '') notes.push(data.notes.trim());
+
+    const droppedHere = new Set((data.drop ?? []).map((d) => d.id));
+    (data.overrides ?? []).forEach((override, j) => {
+      const at: Origin = { file, path: ['overrides', j, 'id'] };
+      const target = working.get(override.id);
+      if (!target) {
+        issues.push(issueAt(at, `no criterion '${override.id}' in the sets this file extends`, 'unknown_id', override.id));
+      } else if (droppedHere.has(override.id)) {
+        issues.push(issueAt(at, `criterion '${override.id}' is both overridden and dropped in this file`, 'override_and_drop'));
+      } else {
+        applyOverride(target, override, { file, path: ['overrides', j] }, data.id);
+      }
+    });
+    (data.drop ?? []).forEach((drop, j) => {
+      if (!working.has(drop.id)) {
+        issues.push(issueAt({ file, path: ['drop', j, 'id'] }, `no criterion '${drop.id}' in the sets this file extends`, 'unknown_id', drop.id));
+        return;
+      }
+      working.delete(drop.id);
+      dropped.push({ id: drop.id, reason: drop.reason.trim(), by: data.id });
+    });
+    const addedHere = new Set<string>();
+    (data.criteria ?? []).forEach((criterion, k) => {
+      const at: Origin = { file, path: ['criteria', k, 'id'] };
+      const existing = working.get(criterion.id);
+      if (addedHere.has(criterion.id)) {
+        issues.push(issueAt(at, `criterion id '${criterion.id}' is used twice in this file`, 'duplicate_id', criterion.id));
+      } else if (existing) {
+        issues.push(issueAt(at, `criterion '${criterion.id}' is already defined by set '${existing.criterion.set}': change it under overrides`, 'duplicate_id', criterion.id));
+      } else {
+        working.set(criterion.id, fromInput(criterion, { file, path: ['criteria', k] }, data.id));
+      }
+      addedHere.add(criterion.id);
+    });
+  }
+
+  const criteria: ResolvedCriterion[] = [];
+  for (const w of working.values()) {
+    const levels = checkLevels(w, issues, issueAt, leaf);
+    if (levels) criteria.push({ ...w.criterion, levels });
+  }
+  if (issues.length > 0) throw new InputError(issues);
+
+  if (requiredLevel === undefined) {
+    notes.push('No file of this criteria chain sets `requiredLevel`: Level 1 is required where the model gives no level.');
+  }
+  if (relativeBand === undefined) {
+    notes.push(`No file of this criteria chain sets \`marginalBand.relative\`: the default of ${DEFAULT_RELATIVE_BAND * 100} % of the governing boundary is used.`);
+  }
+  const defaultedAbsolute = (Object.keys(DEFAULT_ABSOLUTE_BAND) as Quantity[]).filter((q) => absoluteBand[q] === undefined);
+  const usedQuantities = new Set(criteria.map((c) => c.quantity));
+  const defaultedUsed = defaultedAbsolute.filter((q) => usedQuantities.has(q));
+  if (defaultedUsed.length > 0) {
+    notes.push(
+      `Absolute marginal band (used where a boundary is 0) not set for ${defaultedUsed.join(', ')}: defaults ${defaultedUsed
+        .map((q) => `${q} ${DEFAULT_ABSOLUTE_BAND[q]}`)
+        .join(', ')} (SI units).`,
+    );
+  }
+
+  return {
+    id: leaf.data.id,
+    title: leaf.data.title,
+    files: files.map((f) => f.file),
+    chain: files.map((f) => f.data.id),
+    phaseCategories,
+    defaultRequiredLevel: requiredLevel ?? 1,
+    marginalBand: {
+      relative: relativeBand ?? DEFAULT_RELATIVE_BAND,
+      absolute: { ...DEFAULT_ABSOLUTE_BAND, ...absoluteBand },
+    },
+    criteria,
+    dropped,
+    notes,
+  };
+}
+
+function sourceText(source: { document: string; paragraph: string }): string {
+  return `${source.document} ${source.paragraph}`;
+}
+
+function fromInput(input: CriterionInput, origin: Origin, setId: string): Working {
+  const levelOrigin: Working['levelOrigin'] = {};
+  for (const key of Object.keys(input.levels) as LevelKey[]) {
+    levelOrigin[key] = { file: origin.file, path: [...origin.path, 'levels', key] };
+  }
+  return {
+    criterion: {
+      id: input.id,
+      set: setId,
+      title: input.title,
+      mode: input.mode,
+      quantity: input.quantity,
+      applies: structuredClone(input.applies),
+      params: { ...(input.params ?? {}) },
+      source: sourceText(input.source),
+      confidence: input.confidence,
+      note: input.note.trim(),
+    },
+    levels: structuredClone(input.levels),
+    levelOrigin,
+  };
+}
+
+/** Change what the override names; record on the criterion that it was changed, and by whom. */
+function applyOverride(target: Working, override: OverrideInput, origin: Origin, setId: string): void {
+  const c = target.criterion;
+  const changed: string[] = [];
+  if (override.title !== undefined) {
+    c.title = override.title;
+    changed.push('title');
+  }
+  if (override.applies !== undefined) {
+    c.applies = { ...c.applies, ...structuredClone(override.applies) };
+    changed.push('applies');
+  }
+  if (override.levels !== undefined) {
+    for (const [key, bound] of Object.entries(override.levels) as [LevelKey, BoundInput | undefined][]) {
+      if (bound === undefined) continue;
+      target.levels[key] = { ...bound };
+      target.levelOrigin[key] = { file: origin.file, path: [...origin.path, 'levels', key] };
+      changed.push(`Level ${key} bounds`);
+    }
+  }
+  if (override.params !== undefined) {
+    c.params = { ...c.params, ...override.params };
+    changed.push('params');
+  }
+  if (override.confidence !== undefined) {
+    c.confidence = override.confidence;
+    changed.push('confidence');
+  }
+  if (override.source !== undefined) {
+    c.source = sourceText(override.source);
+    changed.push('source');
+  } else if (override.levels !== undefined) {
+    c.source = `${c.source} (bounds changed by set ${setId})`;
+  }
+  if (override.note !== undefined) {
+    c.note = override.note.trim();
+    changed.push('note');
+  }
+  c.set = setId;
+  c.note = `${c.note}\n\n_Changed by set ${setId}: ${changed.join(', ')}._`.trim();
+}
+
+type IssueAt = (origin: Origin, message: string, code: string, found?: unknown) => InputIssue;
+
+/**
+ * Every bound a number, min <= max within a level, and each level at least as strict as the
+ * next worse one (a Level 1 minimum below the Level 2 minimum is a copying error, not a choice).
+ */
+function checkLevels(w: Working, issues: InputIssue[], issueAt: IssueAt, leaf: ParsedCriteriaFile): LevelBounds | undefined {
+  const before = issues.length;
+  const numeric: LevelBounds = {};
+  for (const key of ['1', '2', '3'] as const) {
+    const bound = w.levels[key];
+    const origin = w.levelOrigin[key];
+    if (!bound || !origin) continue;
+    const out: Bound = {};
+    for (const side of ['min', 'max'] as const) {
+      const v = bound[side];
+      if (v === PROGRAMME_VALUE) {
+        const by = origin.file === leaf ? '' : ` (set '${leaf.data.id}' in ${leaf.file} leaves it unset)`;
+        issues.push(
+          issueAt(
+            { file: origin.file, path: [...origin.path, side] },
+            `criterion '${w.criterion.id}': the Level ${key} ${side} is a value the programme must set${by}; ` +
+              `extend the set and give it under overrides, or drop the criterion with a reason`,
+            'unset_value',
+          ),
+        );
+      } else if (v !== undefined) out[side] = v;
+    }
+    if (out.min !== undefined && out.max !== undefined && out.min > out.max) {
+      issues.push(issueAt(origin, `criterion '${w.criterion.id}': Level ${key} min ${out.min} is above its max ${out.max}`, 'conflicting_bounds'));
+    }
+    numeric[key] = out;
+  }
+  if (issues.length > before) return undefined;
+
+  const expanded = expandLevels(numeric);
+  for (const level of LEVELS.slice(0, 2)) {
+    const better = expanded[levelKey(level)];
+    const worse = expanded[levelKey((level + 1) as Level)];
+    const origin = w.levelOrigin[levelKey(level)] ?? w.levelOrigin['1'];
+    if (!origin) continue;
+    const betterMin = better.min ?? -Infinity;
+    const worseMin = worse.min ?? -Infinity;
+    const betterMax = better.max ?? Infinity;
+    const worseMax = worse.max ?? Infinity;
+    if (betterMin < worseMin) {
+      issues.push(
+        issueAt(origin, `criterion '${w.criterion.id}': Level ${level} minimum ${fmt(betterMin)} is looser than the Level ${level + 1} minimum ${fmt(worseMin)}`, 'conflicting_bounds'),
+      );
+    }
+    if (betterMax > worseMax) {
+      issues.push(
+        issueAt(origin, `criterion '${w.criterion.id}': Level ${level} maximum ${fmt(betterMax)} is looser than the Level ${level + 1} maximum ${fmt(worseMax)}`, 'conflicting_bounds'),
+      );
+    }
+  }
+  return issues.length > before ? undefined : numeric;
+}
+
+function fmt(v: number): string {
+  return Number.isFinite(v) ? String(v) : 'none';
+}

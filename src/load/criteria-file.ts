@@ -1,0 +1,128 @@
+/**
+ * Load a criteria set: a path, or the id of a set shipped in the package's criteria/ folder.
+ * Follows the `extends` chain, validates every file (all problems at once, with file, line
+ * and column), then hands the chain, root first, to the pure resolver.
+ */
+import { createHash } from 'node:crypto';
+import { existsSync, readdirSync } from 'node:fs';
+import { readFile } from 'node:fs/promises';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { InputError, type InputIssue } from '../errors.js';
+import type { ParsedCriteriaFile } from '../criteria/parsed-criteria-file.js';
+import { resolveCriteriaChain } from '../criteria/resolve.js';
+import type { Place, ResolvedCriteriaSet } from '../types.js';
+import { criteriaFileSchema } from './criteria-schema.js';
+import { parseStructuredText } from './structured-text.js';
+import { issuesFromZod } from './zod-issues.js';
+
+/** src/load/../../criteria and dist/load/../../criteria are both the package's criteria/ folder. */
+export const SHIPPED_CRITERIA_DIR = fileURLToPath(new URL('../../criteria/', import.meta.url));
+
+export interface LoadedCriteriaSet {
+  set: ResolvedCriteriaSet;
+  /** every file of the chain, root first */
+  files: { path: string; sha256: string }[];
+}
+
+export async function loadCriteriaSet(ref: string): Promise<LoadedCriteriaSet> {
+  const chain: { parsed: ParsedCriteriaFile; sha256: string }[] = [];
+  const issues: InputIssue[] = [];
+  const seen = new Map<string, string>();
+  let next: Located | undefined = locateRef(ref, undefined);
+  let extendsAt: Place | undefined;
+
+  while (next) {
+    const { shown, absolute } = next;
+    if (seen.has(absolute)) {
+      const loop = [...seen.values(), shown].join(' -> ');
+      issues.push({ ...(extendsAt ?? { file: shown }), field: 'extends', message: `extends chain has a cycle: ${loop}`, code: 'extends_cycle' });
+      break;
+    }
+    seen.set(absolute, shown);
+    const text = await readText(absolute, shown, extendsAt);
+    const source = parseStructuredText(text, shown);
+    const checked = criteriaFileSchema.safeParse(source.value);
+    // A file with schema problems is still followed up its chain, so that one run reports all.
+    let parent: unknown;
+    if (checked.success) {
+      chain.unshift({ parsed: { file: shown, data: checked.data, locate: source.locate }, sha256: sha256(text) });
+      parent = checked.data.extends;
+    } else {
+      issues.push(...issuesFromZod(checked.error, source));
+      parent = (source.value as { extends?: unknown } | null)?.extends;
+    }
+    if (typeof parent !== 'string') break;
+    extendsAt = { file: shown, ...(source.locate(['extends']) ?? {}) };
+    next = locateRef(parent, next);
+    if (!next) {
+      issues.push({
+        ...extendsAt,
+        field: 'extends',
+        message: `no criteria file or shipped set '${parent}'`,
+        expected: `a path relative to this file, or one of ${shippedIds().join(', ')}`,
+        found: JSON.stringify(parent),
+        code: 'unknown_extends',
+      });
+    }
+  }
+  if (issues.length > 0) throw new InputError(issues);
+
+  const set = resolveCriteriaChain(chain.map((c) => c.parsed));
+  return { set, files: chain.map((c) => ({ path: c.parsed.file, sha256: c.sha256 })) };
+}
+
+interface Located {
+  /** as shown in messages and in the results' inputs */
+  shown: string;
+  absolute: string;
+}
+
+/**
+ * A ref with a slash or a .yaml/.yml/.json ending is a path (relative to the extending file,
+ * or to the working directory for the first); a bare name is the id of a shipped set.
+ */
+function locateRef(ref: string, from: Located | undefined): Located | undefined {
+  const looksLikePath = /[\\/]/.test(ref) || /\.(ya?ml|json)$/i.test(ref);
+  if (!looksLikePath) {
+    const shipped = path.join(SHIPPED_CRITERIA_DIR, `${ref}.yaml`);
+    if (existsSync(shipped)) return { shown: shownPath(shipped), absolute: shipped };
+    if (from) return undefined;
+  }
+  if (!from) return { shown: ref, absolute: path.resolve(ref) };
+  return { shown: path.join(path.dirname(from.shown), ref), absolute: path.resolve(path.dirname(from.absolute), ref) };
+}
+
+/** A shipped file is shown relative to the working directory when it lies below it. */
+function shownPath(absolute: string): string {
+  const relative = path.relative(process.cwd(), absolute);
+  return relative !== '' && !relative.startsWith('..') && !path.isAbsolute(relative) ? relative : absolute;
+}
+
+function shippedIds(): string[] {
+  try {
+    return readdirSync(SHIPPED_CRITERIA_DIR)
+      .filter((f) => f.endsWith('.yaml'))
+      .map((f) => f.slice(0, -'.yaml'.length))
+      .sort();
+  } catch {
+    return [];
+  }
+}
+
+function sha256(text: string): string {
+  return createHash('sha256').update(text).digest('hex');
+}
+
+async function readText(absolute: string, shown: string, referencedAt: Place | undefined): Promise<string> {
+  try {
+    return await readFile(absolute, 'utf8');
+  } catch (err) {
+    const code = (err as NodeJS.ErrnoException).code;
+    const reason = code === 'ENOENT' ? 'no such file' : `cannot read the file (${code ?? (err as Error).message})`;
+    const shipped = referencedAt === undefined ? ` (shipped sets: ${shippedIds().join(', ')})` : '';
+    throw new InputError([
+      { ...(referencedAt ?? { file: shown }), field: referencedAt ? 'extends' : '', message: `${reason}: ${shown}${shipped}`, code: 'unreadable' },
+    ]);
+  }
+}

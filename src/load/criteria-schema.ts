@@ -1,0 +1,127 @@
+/**
+ * The written form of a criteria file, format `modalgate-criteria/1` (YAML or JSON). This is
+ * what the user types; src/criteria/resolve.ts turns a chain of these into a
+ * ResolvedCriteriaSet (the normalised form in src/types.ts). Every object is strict, so a
+ * misspelt field is reported rather than ignored.
+ */
+import { z } from 'zod';
+
+export const CRITERIA_FORMAT = 'modalgate-criteria/1';
+
+/**
+ * Written in place of a bound that the programme has to choose (e.g. the "heavily damped"
+ * short period of 14 CFR 25.181, which has no number). A chain that still holds it after
+ * resolving is an error.
+ */
+export const PROGRAMME_VALUE = 'programme-value';
+
+const aircraftClasses = ['I', 'II-L', 'II-C', 'III', 'IV'] as const;
+const categories = ['A', 'B', 'C'] as const;
+const modeKinds = ['short_period', 'phugoid', 'dutch_roll', 'roll', 'spiral', 'roll_spiral', 'kinematic', 'other'] as const;
+export const quantities = [
+  'damping_ratio',
+  'natural_frequency',
+  'cap',
+  'damping_frequency_product',
+  'time_to_double',
+  'time_constant',
+] as const;
+
+const idText = z.string().regex(/^[a-z0-9]+(?:[-_.][a-z0-9]+)*$/, 'an id of lower-case letters, digits and - _ .');
+const phaseCode = z.string().regex(/^[A-Z]{1,4}$/, 'a flight-phase code of capital letters, e.g. CR');
+
+const boundValue = z
+  .union([z.number(), z.literal(PROGRAMME_VALUE)])
+  .describe(`a number in the quantity's SI unit, or "${PROGRAMME_VALUE}" where the programme must choose it`);
+
+export const boundSchema = z
+  .strictObject({ min: boundValue.optional(), max: boundValue.optional() })
+  .describe('bounds of one level; {} means any value is acceptable at this level');
+
+export const levelsSchema = z
+  .strictObject({ '1': boundSchema, '2': boundSchema.optional(), '3': boundSchema.optional() })
+  .describe('Level 1 is required; a level left out holds the bounds of the next better level');
+
+export const appliesSchema = z
+  .strictObject({
+    classes: z.array(z.enum(aircraftClasses)).min(1).optional(),
+    categories: z.array(z.enum(categories)).min(1).optional(),
+    phases: z.array(phaseCode).min(1).optional(),
+    altitude: z
+      .strictObject({
+        below: z.number().describe('[m] applies below this geometric altitude').optional(),
+        atOrAbove: z.number().describe('[m] applies at or above this geometric altitude').optional(),
+      })
+      .optional(),
+  })
+  .describe('where the criterion applies; a selector left out means all');
+
+const paramsSchema = z.record(z.string(), z.union([z.number(), z.string(), z.boolean()]));
+
+export const sourceSchema = z.strictObject({
+  document: z.string().min(1).describe('e.g. MIL-F-8785C'),
+  paragraph: z.string().min(1).describe('e.g. 3.2.2.1.2'),
+});
+
+export const criterionSchema = z.strictObject({
+  id: idText,
+  title: z.string().min(1),
+  mode: z.enum(modeKinds),
+  quantity: z.enum(quantities),
+  applies: appliesSchema,
+  levels: levelsSchema,
+  params: paramsSchema.optional(),
+  source: sourceSchema,
+  confidence: z.enum(['published', 'memory']),
+  note: z.string().describe('Markdown'),
+});
+
+export const overrideSchema = z.strictObject({
+  id: idText,
+  title: z.string().min(1).optional(),
+  applies: appliesSchema.optional(),
+  levels: z
+    .strictObject({ '1': boundSchema.optional(), '2': boundSchema.optional(), '3': boundSchema.optional() })
+    .describe('each level given replaces that level of the parent; the others are kept')
+    .optional(),
+  params: paramsSchema.describe('merged key by key into the parent params').optional(),
+  source: sourceSchema.optional(),
+  confidence: z.enum(['published', 'memory']).optional(),
+  note: z.string().describe('Markdown; replaces the parent note').optional(),
+});
+
+export const dropSchema = z.strictObject({
+  id: idText,
+  reason: z.string().min(1).describe('why the programme does not apply this criterion (shown in the report)'),
+});
+
+const absoluteBandSchema = z.strictObject(
+  Object.fromEntries(quantities.map((q) => [q, z.number().nonnegative().optional()])) as Record<
+    (typeof quantities)[number],
+    z.ZodOptional<z.ZodNumber>
+  >,
+);
+
+export const criteriaFileSchema = z.strictObject({
+  format: z.literal(CRITERIA_FORMAT),
+  id: idText,
+  title: z.string().min(1),
+  extends: z.string().min(1).describe('a path relative to this file, or the id of a shipped set').optional(),
+  requiredLevel: z.union([z.literal(1), z.literal(2), z.literal(3)]).describe('level required where the model gives none').optional(),
+  marginalBand: z
+    .strictObject({
+      relative: z.number().min(0).max(1).describe('fraction of the governing boundary, e.g. 0.1').optional(),
+      absolute: absoluteBandSchema.describe("per quantity, in its SI unit, used where the boundary is 0").optional(),
+    })
+    .optional(),
+  phaseCategories: z.record(phaseCode, z.enum(categories)).describe('flight-phase code -> category').optional(),
+  notes: z.string().describe('Markdown').optional(),
+  criteria: z.array(criterionSchema).optional(),
+  overrides: z.array(overrideSchema).optional(),
+  drop: z.array(dropSchema).optional(),
+});
+
+export type CriteriaFileInput = z.infer<typeof criteriaFileSchema>;
+export type CriterionInput = z.infer<typeof criterionSchema>;
+export type OverrideInput = z.infer<typeof overrideSchema>;
+export type BoundInput = z.infer<typeof boundSchema>;

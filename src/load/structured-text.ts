@@ -1,0 +1,136 @@
+/**
+ * Parse YAML or JSON text and keep a way back from a field path to its line and column, so
+ * that schema problems can be reported at their place. JSON is parsed with JSON.parse (fast,
+ * for large sweeps); positions are found lazily, by parsing again with `yaml` only when a
+ * problem has to be located.
+ */
+import { isMap, isSeq, LineCounter, parseDocument, visit, type Node, type Scalar } from 'yaml';
+import { InputError, type InputIssue } from '../errors.js';
+
+export interface StructuredText {
+  /** the parsed value; YAML's special floats (.nan, .inf) come through as numbers */
+  value: unknown;
+  file: string;
+  /** 1-based line and column of the value at `path`, or of its nearest existing parent */
+  locate(path: readonly PropertyKey[]): { line: number; column: number } | undefined;
+  /** 1-based line and column of the key of the mapping entry at `path` (for unknown fields) */
+  locateKey?(path: readonly PropertyKey[]): { line: number; column: number } | undefined;
+}
+
+export function parseStructuredText(text: string, file: string): StructuredText {
+  const isJson = /\.json$/i.test(file);
+  if (isJson) {
+    let value: unknown;
+    try {
+      value = JSON.parse(text);
+    } catch (err) {
+      // Fall through to the YAML parser, which reports a place for the syntax error.
+      const doc = parseWithPositions(text, file);
+      if (doc.errors.length > 0) throw new InputError(doc.errors);
+      throw new InputError([jsonSyntaxIssue((err as Error).message, doc, file)]);
+    }
+    let lazy: ReturnType<typeof parseWithPositions> | undefined;
+    return {
+      value,
+      file,
+      locate: (path) => {
+        lazy ??= parseWithPositions(text, file);
+        return lazy.locate(path);
+      },
+      locateKey: (path) => {
+        lazy ??= parseWithPositions(text, file);
+        return lazy.locateKey(path);
+      },
+    };
+  }
+  const doc = parseWithPositions(text, file);
+  if (doc.errors.length > 0) throw new InputError(doc.errors);
+  return { value: doc.value, file, locate: doc.locate, locateKey: doc.locateKey };
+}
+
+function parseWithPositions(text: string, file: string) {
+  const lineCounter = new LineCounter();
+  const doc = parseDocument(text, { lineCounter, prettyErrors: false, uniqueKeys: true });
+  const errors: InputIssue[] = doc.errors.map((e) => {
+    // With prettyErrors off, yaml leaves linePos unset: place the error from its offset.
+    const pos = e.linePos?.[0] ?? lineCounter.linePos(e.pos[0]);
+    return {
+      file,
+      ...(pos ? { line: pos.line, column: pos.col } : {}),
+      field: '',
+      message: `not valid YAML/JSON: ${e.message.split('\n')[0]}`,
+      code: 'syntax',
+    };
+  });
+  const value: unknown = errors.length === 0 ? doc.toJS({ maxAliasCount: 1000 }) : undefined;
+  const locate = (path: readonly PropertyKey[]) => {
+    let node: unknown = doc.contents;
+    let best: Node | undefined = isNode(node) ? node : undefined;
+    for (const key of path) {
+      if (isMap(node)) {
+        const pair = node.items.find((p) => (isNode(p.key) ? (p.key as { value?: unknown }).value : p.key) === key);
+        if (!pair) break;
+        // Point at the value when there is one, else at the key.
+        node = pair.value ?? pair.key;
+        if (isNode(pair.value)) best = pair.value;
+        else if (isNode(pair.key)) best = pair.key;
+      } else if (isSeq(node) && typeof key === 'number') {
+        const item = node.items[key];
+        if (item === undefined) break;
+        node = item;
+        if (isNode(item)) best = item;
+      } else break;
+    }
+    if (!best?.range) return undefined;
+    const pos = lineCounter.linePos(best.range[0]);
+    return { line: pos.line, column: pos.col };
+  };
+  const locateKey = (path: readonly PropertyKey[]) => {
+    const parent = path.slice(0, -1);
+    const last = path[path.length - 1];
+    let node: unknown = doc.contents;
+    for (const key of parent) {
+      if (isMap(node)) node = node.items.find((p) => (isNode(p.key) ? (p.key as { value?: unknown }).value : p.key) === key)?.value;
+      else if (isSeq(node) && typeof key === 'number') node = node.items[key];
+      else return undefined;
+    }
+    if (!isMap(node)) return undefined;
+    const pair = node.items.find((p) => (isNode(p.key) ? (p.key as { value?: unknown }).value : p.key) === last);
+    if (!pair || !isNode(pair.key) || !pair.key.range) return undefined;
+    const pos = lineCounter.linePos(pair.key.range[0]);
+    return { line: pos.line, column: pos.col };
+  };
+  return { value, errors, locate, locateKey, document: doc, linePos: (offset: number) => lineCounter.linePos(offset) };
+}
+
+/**
+ * Text that YAML reads but JSON.parse refuses: place the problem at the JSON parser's offset
+ * when it gives one, else at the first bare word that JSON does not allow (NaN, Infinity, ...).
+ */
+function jsonSyntaxIssue(message: string, doc: ReturnType<typeof parseWithPositions>, file: string): InputIssue {
+  const offset = /at position (\d+)/.exec(message)?.[1];
+  if (offset !== undefined) {
+    const pos = doc.linePos(Number(offset));
+    return { file, line: pos.line, column: pos.col, field: '', message: `not valid JSON: ${message}`, code: 'syntax' };
+  }
+  let bare: Scalar | undefined;
+  visit(doc.document, {
+    Scalar(_, node) {
+      if (node.type === 'PLAIN' && !/^(-?\d+(\.\d+)?([eE][+-]?\d+)?|true|false|null)$/.test(node.source ?? String(node.value))) {
+        bare = node;
+        return visit.BREAK;
+      }
+      return undefined;
+    },
+  });
+  if (bare?.range) {
+    const pos = doc.linePos(bare.range[0]);
+    const word = bare.source ?? String(bare.value);
+    return { file, line: pos.line, column: pos.col, field: '', message: `not valid JSON: ${word} is not a JSON value`, found: word, code: 'syntax' };
+  }
+  return { file, field: '', message: `not valid JSON: ${message}`, code: 'syntax' };
+}
+
+function isNode(x: unknown): x is Node {
+  return typeof x === 'object' && x !== null && 'range' in x;
+}

@@ -1,0 +1,267 @@
+/**
+ * Mode identification by participation factors and frequency, never by state position.
+ *
+ * 1. Each root goes to the state group holding most of its participation. Roots of "other"
+ *    states (actuators, filters, engines) are `other`; roots of heading, position and height
+ *    states are `kinematic` (a zero root of psi is never a spiral).
+ * 2. On each axis the kinds are assigned by the search in assign-kinds.ts.
+ * 3. The result is checked: characteristic states must hold at least half of the
+ *    participation, no rival assignment may come close, the short period must be faster than
+ *    the phugoid and the roll faster than the spiral. A failed check marks the mode ambiguous
+ *    and a warning says why.
+ */
+import type { Complex, Mode, ModeKind } from '../types.js';
+import { assignKinds, markShare, type Candidate } from './assign-kinds.js';
+import { formatNumber, formatRoot, pct } from './basis-text.js';
+import { modalFigures } from './modal-figures.js';
+import { modeShape } from './mode-shape.js';
+import { LATERAL_TEMPLATES, LONGITUDINAL_TEMPLATES, type ModeTemplate } from './mode-templates.js';
+import type { Root } from './roots.js';
+import type { StateGroup } from './subsystems.js';
+
+export interface IdentifyContext {
+  /** [m/s] true airspeed, to express a v state as sideslip (beta = v / V) in the basis */
+  airspeed: number;
+}
+
+export interface Identification {
+  modes: Mode[];
+  warnings: string[];
+}
+
+/** A root whose largest group holds less than this is split across groups. */
+export const GROUP_DOMINANCE = 0.8;
+/** Characteristic states holding less than this share leave the identification unclear. */
+export const CLEAR_SHARE = 0.5;
+/** A rival assignment closer than this (in eigenvalue-weighted participation) is a near tie. */
+export const TIE_MARGIN = 0.2;
+/** Both marks of a longitudinal pair within this band (around 50 %) signal a third oscillatory mode. */
+const MIXED_PAIR_BAND = [0.3, 0.7] as const;
+
+const GROUP_WORDS: Record<StateGroup, string> = {
+  longitudinal: 'longitudinal',
+  lateral: 'lateral-directional',
+  kinematic: 'kinematic',
+  other: 'other-state',
+};
+
+const KIND_WORDS: Record<ModeKind, string> = {
+  short_period: 'short period',
+  phugoid: 'phugoid',
+  dutch_roll: 'Dutch roll',
+  roll: 'roll',
+  spiral: 'spiral',
+  roll_spiral: 'roll-spiral',
+  kinematic: 'kinematic',
+  other: 'other',
+};
+
+const KIND_ORDER: readonly ModeKind[] = [
+  'short_period',
+  'phugoid',
+  'dutch_roll',
+  'roll',
+  'spiral',
+  'roll_spiral',
+  'other',
+  'kinematic',
+];
+
+export function identifyModes(roots: readonly Root[], context: IdentifyContext): Identification {
+  const modes: Mode[] = [];
+  const warnings: string[] = [];
+  const axis: Record<StateGroup, Root[]> = { longitudinal: [], lateral: [], kinematic: [], other: [] };
+
+  for (const root of roots) {
+    const group = dominantGroup(root);
+    const share = root.groupShare[group];
+    axis[group].push(root);
+    if (share < GROUP_DOMINANCE) {
+      warnings.push(
+        `root ${formatRoot(root.value)} is split across groups (${groupSummary(root)}); taken as ${GROUP_WORDS[group]}`,
+      );
+    }
+  }
+
+  for (const group of ['other', 'kinematic'] as const) {
+    const kind: ModeKind = group;
+    for (const root of axis[group]) {
+      const zero = isNumericalZero(root, roots);
+      const basis = `${formLabel([root])}${zero ? ' at zero' : ''}; ${rootSummary(root)}`;
+      modes.push(buildMode(kind, [root], basis, root.groupShare[group] < GROUP_DOMINANCE));
+    }
+  }
+
+  identifyAxis(axis.longitudinal, LONGITUDINAL_TEMPLATES, 'longitudinal', context, modes, warnings);
+  identifyAxis(axis.lateral, LATERAL_TEMPLATES, 'lateral', context, modes, warnings);
+
+  modes.sort(
+    (a, b) =>
+      KIND_ORDER.indexOf(a.kind) - KIND_ORDER.indexOf(b.kind) ||
+      magnitude(b.eigenvalues[0]!) - magnitude(a.eigenvalues[0]!),
+  );
+  return { modes, warnings };
+}
+
+function identifyAxis(
+  roots: Root[],
+  templates: readonly ModeTemplate[],
+  group: 'longitudinal' | 'lateral',
+  context: IdentifyContext,
+  modes: Mode[],
+  warnings: string[],
+): void {
+  if (roots.length === 0) return;
+  const best = assignKinds(roots, templates);
+  const doubts = new Map<Candidate, string[]>(best.picks.map((pick) => [pick, []]));
+
+  best.picks.forEach((pick, p) => {
+    const why = doubts.get(pick)!;
+    if (pick.share < CLEAR_SHARE) {
+      why.push(`its ${pick.template.label} states hold only ${pct(pick.share)} of the participation`);
+    }
+    const rival = best.rivalTotals[p]!;
+    if (best.total - rival < TIE_MARGIN) {
+      why.push(`a different choice of roots scores almost as well (${best.total.toFixed(2)} vs ${rival.toFixed(2)})`);
+    }
+  });
+  checkOrder(best.picks, 'short_period', 'phugoid', doubts);
+  checkOrder(best.picks, 'roll', 'spiral', doubts);
+  if (group === 'longitudinal') checkThirdOscillatoryMode(roots, best.picks, doubts, warnings);
+
+  const frequencies = best.picks.map((pick) => `${KIND_WORDS[pick.template.kind]} ${formatNumber(characteristicFrequency(pick.roots))}`);
+  for (const pick of best.picks) {
+    const why = doubts.get(pick)!;
+    const kind = pick.template.kind;
+    const ambiguous = why.length > 0 || pick.roots.some((r) => r.groupShare[group] < GROUP_DOMINANCE);
+    let basis =
+      `${formLabel(pick.roots)}; ${rootSummary(pick.roots[0]!)}; ${pick.template.label} states hold ${pct(pick.share)}` +
+      `; frequencies [rad/s]: ${frequencies.join(', ')}`;
+    if (kind === 'dutch_roll') basis += bankToSideslip(pick.roots[0]!, context.airspeed);
+    if (why.length > 0) {
+      warnings.push(`${KIND_WORDS[kind]} identification is not clear-cut: ${why.join('; ')}`);
+      basis += `; uncertain: ${why.join('; ')}`;
+    }
+    modes.push(buildMode(kind, pick.roots, basis, ambiguous));
+  }
+
+  for (const root of roots) {
+    if (best.picks.some((pick) => pick.roots.includes(root))) continue;
+    warnings.push(`${GROUP_WORDS[group]} root ${formatRoot(root.value)} fits none of the ${GROUP_WORDS[group]} modes; reported as other`);
+    modes.push(buildMode('other', [root], `${formLabel([root])}; ${rootSummary(root)}; left over after the ${GROUP_WORDS[group]} modes were assigned`, true));
+  }
+}
+
+/** The faster mode of a pair of kinds must have the higher characteristic frequency. */
+function checkOrder(picks: readonly Candidate[], fast: ModeKind, slow: ModeKind, doubts: Map<Candidate, string[]>): void {
+  const a = picks.find((p) => p.template.kind === fast);
+  const b = picks.find((p) => p.template.kind === slow);
+  if (a === undefined || b === undefined) return;
+  const fa = characteristicFrequency(a.roots);
+  const fb = characteristicFrequency(b.roots);
+  if (fa > fb) return;
+  const text = `the ${KIND_WORDS[fast]} (${formatNumber(fa)} rad/s) is not faster than the ${KIND_WORDS[slow]} (${formatNumber(fb)} rad/s)`;
+  doubts.get(a)!.push(text);
+  doubts.get(b)!.push(text);
+}
+
+/**
+ * Near neutral static stability one short-period root and one phugoid root can combine into a
+ * "third oscillatory mode" (McRuer, Ashkenas and Graham, Aircraft Dynamics and Automatic
+ * Control, 1973, ch. 5): one pair mixing both sets of states plus two real roots. Names then
+ * stop meaning what the criteria assume.
+ */
+function checkThirdOscillatoryMode(
+  roots: readonly Root[],
+  picks: readonly Candidate[],
+  doubts: Map<Candidate, string[]>,
+  warnings: string[],
+): void {
+  const pairs = roots.filter((r) => r.oscillatory);
+  if (pairs.length !== 1 || roots.length - pairs.length < 2) return;
+  const pair = pairs[0]!;
+  const [spTemplate, phTemplate] = LONGITUDINAL_TEMPLATES;
+  const sp = markShare(pair, spTemplate!.marks);
+  const ph = markShare(pair, phTemplate!.marks);
+  const [low, high] = MIXED_PAIR_BAND;
+  if (sp < low || sp > high || ph < low || ph > high) return;
+  const text =
+    `the only longitudinal pair ${formatRoot(pair.value)} mixes ${spTemplate!.label} (${pct(sp)}) and ` +
+    `${phTemplate!.label} (${pct(ph)}) motion beside real roots: the pattern of a third oscillatory mode near neutral static stability`;
+  warnings.push(`longitudinal: ${text}`);
+  for (const pick of picks) doubts.get(pick)!.push('third oscillatory mode present');
+}
+
+function buildMode(kind: ModeKind, roots: readonly Root[], basis: string, ambiguous: boolean): Mode {
+  const ordered = [...roots].sort((a, b) => b.value.re - a.value.re);
+  const eigenvalues: Complex[] =
+    ordered.length === 1 && ordered[0]!.oscillatory
+      ? [ordered[0]!.value, { re: ordered[0]!.value.re, im: -ordered[0]!.value.im }]
+      : ordered.map((r) => r.value);
+  // A split mode shows the shape of its least stable root, which governs the response.
+  const { referenceState, shape } = modeShape(ordered[0]!, kind);
+  return { kind, eigenvalues, ...modalFigures(eigenvalues), basis, ambiguous, referenceState, shape };
+}
+
+function dominantGroup(root: Root): StateGroup {
+  let best: StateGroup = 'longitudinal';
+  for (const group of ['lateral', 'kinematic', 'other'] as const) {
+    if (root.groupShare[group] > root.groupShare[best]) best = group;
+  }
+  return best;
+}
+
+function isNumericalZero(root: Root, all: readonly Root[]): boolean {
+  let radius = 0;
+  for (const r of all) radius = Math.max(radius, magnitude(r.value));
+  return magnitude(root.value) <= 1e-9 * Math.max(radius, 1);
+}
+
+/** [rad/s] |lambda| of a pair, sqrt|l1 l2| of two real roots, |lambda| of one real root */
+function characteristicFrequency(roots: readonly Root[]): number {
+  if (roots.length === 2) return Math.sqrt(Math.abs(roots[0]!.value.re * roots[1]!.value.re));
+  return magnitude(roots[0]!.value);
+}
+
+/** |phi/beta| of the Dutch roll eigenvector, beta = v / V when the state is v. */
+function bankToSideslip(root: Root, airspeed: number): string {
+  const size = (state: string): number | null => {
+    const k = root.states.indexOf(state);
+    return k < 0 ? null : Math.hypot(root.vector.re[k]!, root.vector.im[k]!);
+  };
+  const phi = size('phi');
+  const beta = size('beta') ?? (size('v') === null ? null : size('v')! / airspeed);
+  if (phi === null || beta === null || beta === 0) return '';
+  return `; |phi/beta| ${formatNumber(phi / beta)}${root.states.includes('beta') ? '' : ` (beta = v/V, V = ${formatNumber(airspeed)} m/s)`}`;
+}
+
+function formLabel(roots: readonly Root[]): string {
+  if (roots.length === 2) return `two real roots (split) ${formatRoot(roots[0]!.value)}, ${formatRoot(roots[1]!.value)}`;
+  return `${roots[0]!.oscillatory ? 'oscillatory pair' : 'real root'} ${formatRoot(roots[0]!.value)}`;
+}
+
+function rootSummary(root: Root): string {
+  // the (at most three) states above 10 %, largest first, without sorting every state
+  const top: number[] = [];
+  for (let k = 0; k < root.participation.length; k += 1) {
+    if (root.participation[k]! < 0.1) continue;
+    let at = top.length;
+    while (at > 0 && root.participation[top[at - 1]!]! < root.participation[k]!) at -= 1;
+    top.splice(at, 0, k);
+    if (top.length > 3) top.pop();
+  }
+  const named = top.map((k) => `${root.states[k]} ${pct(root.participation[k]!)}`);
+  return `${groupSummary(root)}; dominant ${named.join(', ')}`;
+}
+
+function groupSummary(root: Root): string {
+  const parts: string[] = [];
+  for (const group of ['longitudinal', 'lateral', 'kinematic', 'other'] as const) {
+    if (root.groupShare[group] >= 0.005) parts.push(`${pct(root.groupShare[group])} ${GROUP_WORDS[group]}`);
+  }
+  return `${parts.join(', ')} participation`;
+}
+
+function magnitude(z: Complex): number {
+  return Math.hypot(z.re, z.im);
+}

@@ -1,0 +1,72 @@
+/**
+ * Render every requested output in memory first, then write them all under temporary names
+ * and rename: a run that fails while rendering leaves every earlier report as it was.
+ */
+import { createHash } from 'node:crypto';
+import type { CheckOutcome } from './check.js';
+import type { Comparison } from './compare/compare-results.js';
+import { findBrowser } from './report/browser.js';
+import { renderHtml } from './report/html.js';
+import { renderResultsJson } from './report/json.js';
+import { renderJunit } from './report/junit.js';
+import { renderPdf } from './report/pdf.js';
+import { buildReportView } from './report/view-model.js';
+import { writeFileAtomic } from './report/write-atomic.js';
+
+export interface OutputRequest {
+  html?: string;
+  pdf?: string;
+  json?: string;
+  junit?: string;
+  paper: 'A4' | 'Letter';
+  browser?: string;
+  failOn: 'fail' | 'marginal';
+  comparison?: Comparison;
+  detail: 'all' | 'issues' | 'none';
+}
+
+export interface Artifact {
+  kind: 'html' | 'pdf' | 'json' | 'junit';
+  path: string;
+  data: string | Buffer;
+}
+
+/** Stable id of a report: the same inputs and run time give the same id. */
+export function reportIdOf(outcome: CheckOutcome): string {
+  const hash = createHash('sha256');
+  for (const input of outcome.results.inputs) hash.update(`${input.role}:${input.sha256}\n`);
+  hash.update(outcome.results.generatedAt);
+  return `MG-${hash.digest('hex').slice(0, 10).toUpperCase()}`;
+}
+
+export async function renderOutputs(outcome: CheckOutcome, request: OutputRequest): Promise<Artifact[]> {
+  const artifacts: Artifact[] = [];
+  const { results, sets } = outcome;
+  if (request.json) artifacts.push({ kind: 'json', path: request.json, data: renderResultsJson(results) });
+  if (request.junit) artifacts.push({ kind: 'junit', path: request.junit, data: renderJunit(results, { failOn: request.failOn }) });
+  if (request.html || request.pdf) {
+    const reportId = reportIdOf(outcome);
+    const view = buildReportView(results, sets, {
+      reportId,
+      ...(request.comparison ? { comparison: request.comparison } : {}),
+      detail: request.detail,
+    });
+    const html = renderHtml(view);
+    if (request.html) artifacts.push({ kind: 'html', path: request.html, data: html });
+    if (request.pdf) {
+      const browser = findBrowser(request.browser);
+      const pdf = await renderPdf(html, {
+        browser,
+        paper: request.paper,
+        reportId,
+        title: `${results.aircraft.name}: handling-qualities review`,
+      });
+      artifacts.push({ kind: 'pdf', path: request.pdf, data: pdf });
+    }
+  }
+  return artifacts;
+}
+
+export async function writeArtifacts(artifacts: Artifact[]): Promise<void> {
+  for (const a of artifacts) await writeFileAtomic(a.path, a.data);
+}

@@ -1,0 +1,155 @@
+/**
+ * The terminal rendering of results: per condition a modes table and a findings table.
+ * Verdicts are words with a symbol; colour is added only when asked (a TTY without NO_COLOR)
+ * and never carries meaning alone.
+ */
+import type { ConditionResult, Results, Verdict } from '../types.js';
+import { formatEigenvalues, formatSig } from './format-number.js';
+import { textTable } from './text-table.js';
+
+export interface TerminalOptions {
+  color: boolean;
+  /** which conditions get their tables: all, only those with fail/marginal/not evaluated, or none */
+  detail: 'all' | 'issues' | 'none';
+  /** include the findings tables (false for the `modes` command) */
+  findings: boolean;
+}
+
+const VERDICT_TEXT: Record<Verdict, string> = {
+  pass: '+ pass',
+  marginal: '~ marginal',
+  fail: 'x FAIL',
+  not_evaluated: '? not evaluated',
+};
+
+const VERDICT_COLOR: Record<Verdict, string> = {
+  pass: '\u001b[32m',
+  marginal: '\u001b[33m',
+  fail: '\u001b[31;1m',
+  not_evaluated: '\u001b[36m',
+};
+
+export function verdictText(verdict: Verdict): string {
+  return VERDICT_TEXT[verdict];
+}
+
+export function formatResultsText(results: Results, options: TerminalOptions): string {
+  const paint = (code: string, text: string) => (options.color ? `${code}${text}\u001b[0m` : text);
+  const out: string[] = [];
+  out.push(paint('\u001b[1m', `modalgate ${results.tool.version}: ${results.aircraft.name} (Class ${results.aircraft.class})`));
+  if (results.criteriaSets.length > 0) {
+    out.push(`criteria: ${results.criteriaSets.map((s) => `${s.id} (${s.chain.join(' > ')})`).join('; ')}`);
+  }
+  const shown = results.conditions.filter((c) => showCondition(c, options.detail));
+  for (const c of shown) {
+    out.push('');
+    out.push(paint('\u001b[1m', conditionHeading(c)));
+    for (const n of c.notes) out.push(`  note: ${n}`);
+    out.push(indent(modesTable(c)));
+    if (options.findings) {
+      if (c.findings.length === 0) out.push('  (no criterion applies to this condition)');
+      else out.push(indent(findingsTable(c, (v, t) => paint(VERDICT_COLOR[v], t))));
+    }
+    for (const w of c.warnings) out.push(paint('\u001b[33m', `  warning: ${w}`));
+  }
+  if (shown.length < results.conditions.length) {
+    out.push('');
+    out.push(
+      `${results.conditions.length - shown.length} of ${results.conditions.length} conditions not listed (detail: ${options.detail}).`,
+    );
+  }
+  if (options.findings) {
+    const s = results.summary;
+    out.push('');
+    out.push(
+      `summary: ${s.pass} pass, ${s.marginal} marginal, ${s.fail} fail, ${s.not_evaluated} not evaluated ` +
+        `over ${results.conditions.length} condition(s)`,
+    );
+  }
+  return out.join('\n');
+}
+
+function showCondition(c: ConditionResult, detail: TerminalOptions['detail']): boolean {
+  if (detail === 'all') return true;
+  if (detail === 'none') return false;
+  return c.findings.some((f) => f.verdict !== 'pass') || c.warnings.length > 0;
+}
+
+function conditionHeading(c: ConditionResult): string {
+  const parts = [`condition ${c.id}`, `phase ${c.phase}`];
+  if (c.category) parts.push(`Category ${c.category}`);
+  parts.push(`V ${formatSig(c.airspeed, 4)} m/s`);
+  if (c.altitude !== null) parts.push(`h ${formatSig(c.altitude, 4)} m`);
+  if (c.requiredLevel !== null) parts.push(`required Level ${c.requiredLevel} (${c.requiredLevelFrom})`);
+  return parts.join(', ');
+}
+
+function modesTable(c: ConditionResult): string {
+  const rows = c.modes.map((m) => [
+    m.kind.replace('_', ' ') + (m.ambiguous ? ' (?)' : ''),
+    formatEigenvalues(m.eigenvalues),
+    formatSig(m.naturalFrequency),
+    formatSig(m.dampingRatio),
+    formatSig(m.period),
+    formatSig(m.timeConstant),
+    formatSig(m.timeToHalf),
+    formatSig(m.timeToDouble),
+  ]);
+  return textTable(
+    [
+      { header: 'mode' },
+      { header: 'eigenvalues [1/s]' },
+      { header: 'wn [rad/s]', align: 'right' },
+      { header: 'zeta', align: 'right' },
+      { header: 'period [s]', align: 'right' },
+      { header: 'tau [s]', align: 'right' },
+      { header: 't1/2 [s]', align: 'right' },
+      { header: 't2 [s]', align: 'right' },
+    ],
+    rows,
+  );
+}
+
+function findingsTable(c: ConditionResult, paintVerdict: (v: Verdict, text: string) => string): string {
+  const rows = c.findings.map((f) => [
+    f.criterion,
+    `${f.mode.replace('_', ' ')} ${f.quantity.replace(/_/g, ' ')}`,
+    f.value === null ? '-' : `${formatSig(f.value)}${f.unit ? ` ${f.unit}` : ''}`,
+    boundsText(f.bounds[String(c.requiredLevel ?? 1) as '1' | '2' | '3']),
+    f.level === null ? 'none' : `Level ${f.level}`,
+    VERDICT_TEXT[f.verdict],
+    formatSig(f.margin),
+    f.confidence === 'memory' ? 'memory' : '',
+  ]);
+  return textTable(
+    [
+      { header: 'criterion' },
+      { header: 'quantity' },
+      { header: 'value', align: 'right' },
+      { header: 'required bounds' },
+      { header: 'reached' },
+      { header: 'verdict' },
+      { header: 'margin', align: 'right' },
+      { header: 'values' },
+    ],
+    rows,
+    (i, j, padded) => {
+      const f = c.findings[i];
+      return j === 5 && f ? paintVerdict(f.verdict, padded) : padded;
+    },
+  );
+}
+
+function boundsText(b: { min?: number; max?: number } | undefined): string {
+  if (!b || (b.min === undefined && b.max === undefined)) return 'no bound';
+  if (b.min !== undefined && b.max !== undefined) return `${formatSig(b.min)} to ${formatSig(b.max)}`;
+  if (b.min !== undefined) return `>= ${formatSig(b.min)}`;
+  return `<= ${formatSig(b.max)}`;
+}
+
+function indent(text: string): string {
+  return text
+    .split('\n')
+    .map((l) => `  ${l}`)
+    .join('\n');
+}

@@ -1,0 +1,218 @@
+/**
+ * Results -> ReportView: the one place that decides what the review document says and how
+ * each number is printed. Pure: no files, no clock (the date is the run's own generatedAt).
+ */
+import type {
+  ConditionResult, DynamicsForm, Finding, Mode, ResolvedCriteriaSet, Results, Verdict, VerdictCounts,
+} from '../types.js';
+import { STANDING_CAUTIONS } from './cautions.js';
+import { dutchRollChart } from './charts/dutch-roll-chart.js';
+import { sPlaneChart } from './charts/s-plane-chart.js';
+import { shortPeriodChart } from './charts/short-period-chart.js';
+import { safeId } from './charts/svg-kit.js';
+import { categoryLabel, classLabel, MODE_LABEL, QUANTITY_LABEL, QUANTITY_UNIT } from './labels.js';
+import type {
+  ChartView, ConditionView, CriteriaSetView, FindingRow, ModeRow, ReportView, VerdictTally,
+} from './report-view.js';
+import { VERDICT_ORDER, verdictMark, worstVerdict } from './verdict-marks.js';
+import { dateText, eigenvalueText, levelBoundsText, lengthText, sig, signedSig, unitText, withUnit } from './view-format.js';
+
+export interface ReportViewOptions {
+  reportId: string;
+  /** which conditions get full sections; the summary always lists every condition */
+  detail?: 'all' | 'issues' | 'none';
+  /** baseline comparison from the caller; not shown in this version of the document */
+  comparison?: unknown;
+}
+
+const FORM_LABEL: Record<DynamicsForm, string> = {
+  stateSpace: 'state-space matrices',
+  derivatives: 'dimensional stability derivatives',
+  nondimensional: 'nondimensional coefficients',
+  mixed: 'mixed forms',
+};
+
+const REQUIRED_FROM: Record<'model' | 'criteria default' | 'none', string> = {
+  model: 'set in the model file',
+  'criteria default': 'criteria set default',
+  none: 'no criteria evaluated',
+};
+
+function tallyOf(counts: VerdictCounts): VerdictTally[] {
+  return VERDICT_ORDER.map((v) => ({ mark: verdictMark(v), count: counts[v] }));
+}
+
+function countVerdicts(findings: readonly Finding[]): VerdictCounts {
+  const counts: VerdictCounts = { pass: 0, marginal: 0, fail: 0, not_evaluated: 0 };
+  for (const f of findings) counts[f.verdict] += 1;
+  return counts;
+}
+
+function modeRow(mode: Mode): ModeRow {
+  return {
+    kind: MODE_LABEL[mode.kind],
+    eigenvalues: eigenvalueText(mode.eigenvalues),
+    naturalFrequency: sig(mode.naturalFrequency),
+    dampingRatio: sig(mode.dampingRatio),
+    period: sig(mode.period),
+    timeConstant: sig(mode.timeConstant),
+    timeToHalf: sig(mode.timeToHalf),
+    timeToDouble: sig(mode.timeToDouble),
+    basis: mode.basis,
+    ambiguous: mode.ambiguous,
+  };
+}
+
+function findingRow(f: Finding): FindingRow {
+  const unit = f.unit.trim() !== '' ? f.unit : QUANTITY_UNIT[f.quantity];
+  return {
+    criterion: f.criterion,
+    set: f.set,
+    title: f.title,
+    mode: MODE_LABEL[f.mode],
+    quantity: QUANTITY_LABEL[f.quantity],
+    unit: unitText(unit),
+    value: sig(f.value),
+    bounds: levelBoundsText(f.bounds),
+    levelReached: f.verdict === 'not_evaluated' ? '\u2013' : f.level === null ? 'none' : `Level ${f.level}`,
+    mark: verdictMark(f.verdict),
+    margin: signedSig(f.margin),
+    source: f.source,
+    memory: f.confidence === 'memory',
+    reason: f.reason,
+    method: f.method ?? null,
+  };
+}
+
+function charts(c: ConditionResult): ChartView[] {
+  const id = safeId(c.id);
+  return [
+    { id: `${id}-s-plane`, title: 's-plane map', ...sPlaneChart(c) },
+    { id: `${id}-short-period`, title: 'Short period: \u03c9sp against n/\u03b1', ...shortPeriodChart(c) },
+    { id: `${id}-dutch-roll`, title: 'Dutch roll: \u03b6d against \u03c9nd', ...dutchRollChart(c) },
+  ];
+}
+
+/** Cautions the reader needs for this condition, beyond the warnings the analysis raised. */
+function derivedWarnings(c: ConditionResult): string[] {
+  const out: string[] = [];
+  const memory = c.findings.filter((f) => f.confidence === 'memory');
+  if (memory.length > 0) {
+    out.push(
+      `${memory.length} of ${c.findings.length} findings rest on boundary values recalled from memory ` +
+        `(${[...new Set(memory.map((f) => f.criterion))].join(', ')}): verify them against the published document.`,
+    );
+  }
+  const ambiguous = c.modes.filter((m) => m.ambiguous);
+  if (ambiguous.length > 0) {
+    out.push(`Identification not clear-cut for: ${ambiguous.map((m) => MODE_LABEL[m.kind]).join(', ')} (see the basis column).`);
+  }
+  if (c.category === null) out.push(`Flight phase ${c.phase} has no category in the criteria set: category-dependent criteria could not be applied.`);
+  return out;
+}
+
+function subsystemsText(c: ConditionResult): string {
+  const s = c.subsystems;
+  const parts: string[] = [];
+  if (s.longitudinal.length > 0) parts.push(`longitudinal ${s.longitudinal.join(', ')}`);
+  if (s.lateral.length > 0) parts.push(`lateral-directional ${s.lateral.join(', ')}`);
+  if (s.kinematic.length > 0) parts.push(`kinematic ${s.kinematic.join(', ')}`);
+  if (s.other.length > 0) parts.push(`other ${s.other.join(', ')}`);
+  return parts.join('; ');
+}
+
+function conditionView(c: ConditionResult, index: number, detail: 'all' | 'issues' | 'none'): ConditionView {
+  const verdicts: Verdict[] = c.findings.map((f) => f.verdict);
+  const mark = verdictMark(worstVerdict(verdicts));
+  const detailed = detail === 'all' || (detail === 'issues' && verdicts.some((v) => v !== 'pass'));
+  return {
+    id: c.id,
+    anchor: `condition-${index + 1}-${safeId(c.id)}`,
+    phase: c.phase,
+    category: categoryLabel(c.category),
+    airspeed: withUnit(c.airspeed, 'm/s', 4),
+    altitude: lengthText(c.altitude),
+    requiredLevel: c.requiredLevel === null ? 'not set' : `Level ${c.requiredLevel}`,
+    requiredLevelFrom: REQUIRED_FROM[c.requiredLevelFrom ?? 'none'],
+    form: FORM_LABEL[c.form],
+    subsystems: subsystemsText(c),
+    coupling: sig(c.coupling, 2),
+    mark,
+    tally: tallyOf(countVerdicts(c.findings)),
+    modes: c.modes.map(modeRow),
+    findings: c.findings.map(findingRow),
+    warnings: [...c.warnings, ...derivedWarnings(c)],
+    notes: c.notes,
+    charts: detailed ? charts(c) : [],
+    detailed,
+    omission: detailed ? null : detail === 'none' ? 'Detail omitted at the request of the caller' : 'Detail omitted: every finding of this condition passed',
+  };
+}
+
+function setView(set: ResolvedCriteriaSet): CriteriaSetView {
+  const band = set.marginalBand;
+  const absolute = Object.entries(band.absolute).map(([q, v]) => `${q} ${sig(v)}`);
+  return {
+    id: set.id,
+    title: set.title,
+    chain: set.chain.join(' \u2192 '),
+    files: set.files,
+    defaultRequiredLevel: `Level ${set.defaultRequiredLevel}`,
+    marginalBand: `${sig(band.relative * 100, 2)} % of the boundary${absolute.length > 0 ? `; where the boundary is 0: ${absolute.join(', ')}` : ''}`,
+    phaseCategories: Object.entries(set.phaseCategories).map(([p, c]) => `${p} ${c}`).join(', ') || 'none listed',
+    notes: set.notes,
+    criteria: set.criteria.map((c) => ({
+      id: c.id,
+      title: c.title,
+      source: c.source,
+      memory: c.confidence === 'memory',
+      note: c.note,
+    })),
+    dropped: set.dropped,
+  };
+}
+
+function requiredLevelsText(conditions: readonly ConditionResult[]): string {
+  const byLevel = new Map<string, string[]>();
+  for (const c of conditions) {
+    const key = c.requiredLevel === null ? 'not set' : `Level ${c.requiredLevel}`;
+    byLevel.set(key, [...(byLevel.get(key) ?? []), c.id]);
+  }
+  if (byLevel.size === 1) return `${[...byLevel.keys()][0] ?? 'not set'} in every condition`;
+  return [...byLevel.entries()].sort(([a], [b]) => a.localeCompare(b)).map(([l, ids]) => `${l} (${ids.join(', ')})`).join('; ');
+}
+
+/** Shell-style quoting so that the printed command can be pasted back. */
+function commandText(args: readonly string[]): string {
+  if (args.length === 0) return 'not run from the command line';
+  return args.map((a) => (/^[\w@%+=:,./-]+$/.test(a) ? a : `'${a.replace(/'/g, `'\\''`)}'`)).join(' ');
+}
+
+export function buildReportView(results: Results, sets: ResolvedCriteriaSet[], options: ReportViewOptions): ReportView {
+  const allFindings = results.conditions.flatMap((c) => c.findings);
+  const counts = countVerdicts(allFindings);
+  return {
+    reportId: options.reportId,
+    title: `${results.aircraft.name}: handling-qualities review`,
+    aircraft: { name: results.aircraft.name, classLabel: classLabel(results.aircraft.class) },
+    date: dateText(results.generatedAt),
+    generatedAt: results.generatedAt,
+    tool: { name: results.tool.name, version: results.tool.version },
+    modelFiles: results.inputs.filter((i) => i.role === 'model' || i.role === 'table').map((i) => i.path),
+    criteriaSets: sets.map(setView),
+    requiredLevels: requiredLevelsText(results.conditions),
+    overall: verdictMark(worstVerdict(allFindings.map((f) => f.verdict))),
+    tally: tallyOf(counts),
+    totalFindings: allFindings.length,
+    memoryFindings: allFindings.filter((f) => f.confidence === 'memory').length,
+    conditions: results.conditions.map((c, i) => conditionView(c, i, options.detail ?? 'all')),
+    cautions: [...STANDING_CAUTIONS],
+    traceability: {
+      inputs: results.inputs.map((i) => ({ role: i.role, path: i.path, sha256: i.sha256 })),
+      command: commandText(results.command),
+      toolVersion: `${results.tool.name} ${results.tool.version}`,
+      criteriaSetIds: results.criteriaSets.map((s) => `${s.id} (${s.chain.join(' \u2192 ')})`),
+      reportId: options.reportId,
+    },
+  };
+}

@@ -1,0 +1,76 @@
+/** Assemble the results object (contract 2, `modalgate-results/1`) from the pipeline's parts. */
+import type {
+  AircraftModel,
+  Category,
+  ConditionResult,
+  Finding,
+  FlightCondition,
+  InputFile,
+  Level,
+  ModalAnalysis,
+  ResolvedCriteriaSet,
+  Results,
+  VerdictCounts,
+} from './types.js';
+
+export interface ConditionEvaluation {
+  category: Category | null;
+  requiredLevel: Level;
+  requiredLevelFrom: 'model' | 'criteria default';
+  findings: Finding[];
+  warnings: string[];
+}
+
+export function assembleCondition(
+  condition: FlightCondition,
+  analysis: ModalAnalysis,
+  evaluations: ConditionEvaluation[],
+): ConditionResult {
+  const first = evaluations[0];
+  const requiredLevel = first?.requiredLevel ?? condition.requiredLevel;
+  const requiredLevelFrom = first?.requiredLevelFrom ?? (condition.requiredLevel !== null ? 'model' : null);
+  const warnings = [...analysis.warnings];
+  for (const e of evaluations) for (const w of e.warnings) if (!warnings.includes(w)) warnings.push(w);
+  return {
+    id: condition.id,
+    phase: condition.phase,
+    category: first?.category ?? null,
+    requiredLevel,
+    requiredLevelFrom,
+    airspeed: condition.airspeed,
+    altitude: condition.altitude,
+    form: condition.form,
+    subsystems: analysis.subsystems,
+    coupling: analysis.coupling,
+    modes: analysis.modes,
+    findings: evaluations.flatMap((e) => e.findings),
+    warnings,
+    notes: condition.notes,
+  };
+}
+
+export function countVerdicts(findings: Iterable<Finding>): VerdictCounts {
+  const counts: VerdictCounts = { pass: 0, marginal: 0, fail: 0, not_evaluated: 0 };
+  for (const f of findings) counts[f.verdict] += 1;
+  return counts;
+}
+
+export function assembleResults(parts: {
+  request: { toolVersion: string; command: string[]; generatedAt: string };
+  model: AircraftModel;
+  sets: ResolvedCriteriaSet[];
+  inputs: InputFile[];
+  conditions: ConditionResult[];
+}): Results {
+  return {
+    format: 'modalgate-results/1',
+    tool: { name: 'modalgate', version: parts.request.toolVersion },
+    generatedAt: parts.request.generatedAt,
+    command: parts.request.command,
+    inputs: parts.inputs,
+    aircraft: { ...parts.model.aircraft },
+    criteriaSets: parts.sets.map((s) => ({ id: s.id, title: s.title, chain: s.chain })),
+    summary: countVerdicts(parts.conditions.flatMap((c) => c.findings)),
+    conditions: parts.conditions,
+  };
+}

@@ -1,0 +1,307 @@
+/**
+ * The normalised data model, declared once. Everything here is SI (m, kg, N, s) with angles
+ * in rad and rates in rad/s. The written form (what the user typed) lives in the zod schemas
+ * under src/load/ and is converted to these types at load time.
+ */
+
+export type AircraftClass = 'I' | 'II-L' | 'II-C' | 'III' | 'IV';
+export type UnitSystem = 'US' | 'SI';
+export type Level = 1 | 2 | 3;
+export type Category = 'A' | 'B' | 'C';
+
+export interface Place {
+  file: string;
+  line?: number;
+  column?: number;
+}
+
+/** x' = A x + B u, y = C x + D u, with states, inputs and outputs named (never by position). */
+export interface StateSpace {
+  states: string[];
+  /** n x n */
+  A: number[][];
+  inputs: string[];
+  /** n x m (n x 0 when there are no inputs) */
+  B: number[][];
+  outputs: string[];
+  /** p x n */
+  C: number[][];
+  /** p x m */
+  D: number[][];
+}
+
+/** How a condition's dynamics were written. */
+export type DynamicsForm = 'stateSpace' | 'derivatives' | 'nondimensional' | 'mixed';
+
+/** Lift data kept from nondimensional input, for n/alpha = q S CL_alpha / W. */
+export interface LiftData {
+  /** [Pa] */
+  dynamicPressure: number;
+  /** [m^2] */
+  wingArea: number;
+  /** [N] */
+  weight: number;
+  /** [1/rad] */
+  liftCurveSlope: number;
+}
+
+export interface FlightCondition {
+  id: string;
+  /** flight-phase code as written, e.g. CR, PA, CO */
+  phase: string;
+  /** [m/s] true airspeed */
+  airspeed: number;
+  /** [m] geometric altitude, null when not given */
+  altitude: number | null;
+  /** required level from the model file; null means "the criteria set's default" */
+  requiredLevel: Level | null;
+  /** [g/rad] n/alpha given by the user (overrides the computed one), else null */
+  nAlpha: number | null;
+  /** [rad] trim pitch attitude, when known */
+  theta0: number | null;
+  form: DynamicsForm;
+  system: StateSpace;
+  liftData: LiftData | null;
+  /** conversions and defaults applied while building the model, shown in every output */
+  notes: string[];
+  place: Place;
+}
+
+export interface AircraftModel {
+  file: string;
+  aircraft: { name: string; class: AircraftClass };
+  /** the unit system the file was written in (the model itself is SI) */
+  units: UnitSystem;
+  conditions: FlightCondition[];
+}
+
+// ---------------------------------------------------------------- modes
+
+export type ModeKind =
+  | 'short_period'
+  | 'phugoid'
+  | 'dutch_roll'
+  | 'roll'
+  | 'spiral'
+  | 'roll_spiral'
+  | 'kinematic'
+  | 'other';
+
+export interface Complex {
+  re: number;
+  im: number;
+}
+
+/** One state's part in a mode. */
+export interface StateShare {
+  state: string;
+  /** eigenvector magnitude relative to the reference state (the reference has 1) */
+  magnitude: number;
+  /** [rad] eigenvector phase relative to the reference state */
+  phase: number;
+  /** participation factor magnitude |w_i v_i|, normalised to sum 1 over the mode's states */
+  participation: number;
+}
+
+export interface Mode {
+  kind: ModeKind;
+  /** one real root, a complex pair (positive imaginary part first) or two real roots (split) */
+  eigenvalues: Complex[];
+  /** [rad/s] |lambda|; for two real roots sqrt(l1 l2) when both are of one sign, else null */
+  naturalFrequency: number | null;
+  /** -Re(lambda)/|lambda|; for two stable real roots -(l1+l2)/(2 sqrt(l1 l2)) (> 1); else null */
+  dampingRatio: number | null;
+  /** [rad/s] |Im(lambda)|, null for real roots */
+  dampedFrequency: number | null;
+  /** [s] 2 pi / omega_d, null for real roots */
+  period: number | null;
+  /** [s] -1/lambda of a real root (negative when divergent); null for oscillatory modes */
+  timeConstant: number | null;
+  /** [s] ln2 / -Re(lambda) of the slowest root, only when every root converges */
+  timeToHalf: number | null;
+  /** [s] ln2 / Re(lambda) of the fastest divergent root, only when a root diverges */
+  timeToDouble: number | null;
+  /** cycles to half amplitude, oscillatory convergent modes only */
+  cyclesToHalf: number | null;
+  /** why this kind was chosen: dominant states, participation sums, frequency rule */
+  basis: string;
+  /** true when the identification was not clear-cut (a warning says why) */
+  ambiguous: boolean;
+  /** reference state of the normalised eigenvector */
+  referenceState: string;
+  /** per state, largest participation first */
+  shape: StateShare[];
+}
+
+export interface Subsystems {
+  longitudinal: string[];
+  lateral: string[];
+  kinematic: string[];
+  other: string[];
+}
+
+export interface ModalAnalysis {
+  subsystems: Subsystems;
+  /**
+   * Coupling between the longitudinal and lateral-directional blocks: the largest
+   * cross-block entry of A scaled by the diagonal blocks (dimensionless, 0 = decoupled).
+   */
+  coupling: number;
+  /** true when the blocks are decoupled within tolerance (symmetry assumption holds) */
+  decoupled: boolean;
+  modes: Mode[];
+  warnings: string[];
+}
+
+// ---------------------------------------------------------------- findings
+
+export type Verdict = 'pass' | 'marginal' | 'fail' | 'not_evaluated';
+
+/**
+ * The kinds of bounded quantity; each has one evaluator in the criteria evaluator table.
+ * - damping_ratio             zeta [-]
+ * - natural_frequency         omega_n [rad/s]
+ * - cap                       control anticipation parameter omega_sp^2 / (n/alpha) [1/(s^2 g)]
+ * - damping_frequency_product zeta omega_n [rad/s]
+ * - time_to_double            [s] (a convergent mode has an infinite time to double)
+ * - time_constant             [s] of a real root
+ */
+export type Quantity =
+  | 'damping_ratio'
+  | 'natural_frequency'
+  | 'cap'
+  | 'damping_frequency_product'
+  | 'time_to_double'
+  | 'time_constant';
+
+/** Bounds of one level: min and/or max of the quantity (SI). */
+export interface Bound {
+  min?: number;
+  max?: number;
+}
+
+export type LevelBounds = Partial<Record<'1' | '2' | '3', Bound>>;
+
+export interface Finding {
+  criterion: string;
+  /** the criteria set the criterion came from */
+  set: string;
+  title: string;
+  mode: ModeKind;
+  quantity: Quantity;
+  /** [SI unit of the quantity] */
+  value: number | null;
+  unit: string;
+  /** best level whose bounds hold, null when none */
+  level: Level | null;
+  verdict: Verdict;
+  /** signed distance to the governing boundary of the required level (positive = inside) */
+  margin: number | null;
+  bounds: LevelBounds;
+  source: string;
+  /** 'published' = value seen in the document; 'memory' = recalled, must be verified */
+  confidence: 'published' | 'memory';
+  reason: string;
+  /** how a derived figure was obtained (e.g. n/alpha method) */
+  method?: string;
+}
+
+export interface ConditionResult {
+  id: string;
+  phase: string;
+  category: Category | null;
+  /** null only when no criteria were evaluated (the `modes` command) and the model gives none */
+  requiredLevel: Level | null;
+  /** where the required level came from (null when not set) */
+  requiredLevelFrom: 'model' | 'criteria default' | null;
+  /** [m/s] */
+  airspeed: number;
+  /** [m] */
+  altitude: number | null;
+  form: DynamicsForm;
+  subsystems: Subsystems;
+  coupling: number;
+  modes: Mode[];
+  findings: Finding[];
+  warnings: string[];
+  /** conversions and defaults applied */
+  notes: string[];
+}
+
+export interface InputFile {
+  role: 'model' | 'criteria' | 'table' | 'baseline';
+  path: string;
+  sha256: string;
+}
+
+export interface VerdictCounts {
+  pass: number;
+  marginal: number;
+  fail: number;
+  not_evaluated: number;
+}
+
+export interface Results {
+  format: 'modalgate-results/1';
+  tool: { name: 'modalgate'; version: string };
+  /** ISO time of the run (set at the I/O edge) */
+  generatedAt: string;
+  /** the command line that produced the results, when run from the CLI */
+  command: string[];
+  inputs: InputFile[];
+  aircraft: { name: string; class: AircraftClass };
+  criteriaSets: { id: string; title: string; chain: string[] }[];
+  summary: VerdictCounts;
+  conditions: ConditionResult[];
+}
+
+// ---------------------------------------------------------------- criteria (resolved form)
+
+export type Confidence = 'published' | 'memory';
+
+export interface ResolvedCriterion {
+  id: string;
+  /** id of the criteria set (file) that defined or last changed this criterion */
+  set: string;
+  title: string;
+  mode: ModeKind;
+  /** the evaluator kind */
+  quantity: Quantity;
+  /** where it applies; an absent selector means "all" */
+  applies: {
+    classes?: AircraftClass[];
+    categories?: Category[];
+    phases?: string[];
+    /**
+     * [m] geometric altitude band, e.g. the 18,000 ft split of 14 CFR 23.181: `below` applies
+     * where altitude < below, `atOrAbove` where altitude >= atOrAbove. A condition without an
+     * altitude gives a not_evaluated finding for such a criterion (no guess).
+     */
+    altitude?: { below?: number; atOrAbove?: number };
+  };
+  levels: LevelBounds;
+  /** quantity-specific parameters (e.g. the omega^2 |phi/beta| adjustment factors) */
+  params: Record<string, number | string | boolean>;
+  /** document and paragraph */
+  source: string;
+  confidence: Confidence;
+  /** Markdown */
+  note: string;
+}
+
+export interface ResolvedCriteriaSet {
+  id: string;
+  title: string;
+  /** files from the root of the `extends` chain to this one */
+  files: string[];
+  /** set ids from the root of the `extends` chain to this one */
+  chain: string[];
+  phaseCategories: Record<string, Category>;
+  defaultRequiredLevel: Level;
+  /** marginal band: fraction of the boundary, and the absolute band used where the boundary is 0 */
+  marginalBand: { relative: number; absolute: Record<string, number> };
+  criteria: ResolvedCriterion[];
+  dropped: { id: string; reason: string; by: string }[];
+  /** Markdown notes of the set (all files of the chain, root first) */
+  notes: string[];
+}

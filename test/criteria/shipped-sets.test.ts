@@ -1,0 +1,140 @@
+/**
+ * Spot checks of the shipped criteria sets against the published tables, and of the
+ * confidence flags they carry. Values copied from the documents named beside each row.
+ */
+import { describe, expect, it } from 'vitest';
+import { loadCriteriaSet } from '../../src/load/criteria-file.js';
+import type { LevelBounds, ResolvedCriteriaSet } from '../../src/types.js';
+
+const mil = (await loadCriteriaSet('mil-f-8785c')).set;
+
+function criterion(set: ResolvedCriteriaSet, id: string) {
+  const c = set.criteria.find((x) => x.id === id);
+  if (!c) throw new Error(`no criterion ${id}`);
+  return c;
+}
+
+describe('mil-f-8785c: values against MIL-F-8785C (5 Nov 1980)', () => {
+  const rows: [id: string, levels: LevelBounds, confidence: 'published' | 'memory', paragraph: string][] = [
+    // 3.2.2.1.2 short-period damping, Cat A and C: 0.35-1.30 / 0.25-2.00 / >= 0.15 (from memory)
+    ['short-period-damping-cat-a-c', { '1': { min: 0.35, max: 1.3 }, '2': { min: 0.25, max: 2 }, '3': { min: 0.15 } }, 'memory', '3.2.2.1.2'],
+    // 3.2.2.1.2 Cat B: 0.30-2.00 / 0.20-2.00 / >= 0.15 (from memory)
+    ['short-period-damping-cat-b', { '1': { min: 0.3, max: 2 }, '2': { min: 0.2, max: 2 }, '3': { min: 0.15 } }, 'memory', '3.2.2.1.2'],
+    // 3.2.2.1.1 CAP, Cat A 0.28-3.6 / 0.16-10; Level 3 outside Level 2 (from memory)
+    ['short-period-cap-cat-a', { '1': { min: 0.28, max: 3.6 }, '2': { min: 0.16, max: 10 }, '3': {} }, 'memory', '3.2.2.1.1'],
+    // 3.2.2.1.1 CAP, Cat B 0.085-3.6 / 0.038-10 (from memory)
+    ['short-period-cap-cat-b', { '1': { min: 0.085, max: 3.6 }, '2': { min: 0.038, max: 10 }, '3': {} }, 'memory', '3.2.2.1.1'],
+    // 3.2.2.1.1 CAP, Cat C 0.16-3.6 / 0.096-10 (from memory)
+    ['short-period-cap-cat-c', { '1': { min: 0.16, max: 3.6 }, '2': { min: 0.096, max: 10 }, '3': {} }, 'memory', '3.2.2.1.1'],
+    // 3.2.2.1.1 minimum omega_sp, Cat A 1.0 / 0.6; Cat C Class I, II-C, IV 0.87 / 0.6; II-L, III 0.7 / 0.4 (from memory)
+    ['short-period-frequency-cat-a', { '1': { min: 1 }, '2': { min: 0.6 }, '3': {} }, 'memory', '3.2.2.1.1'],
+    ['short-period-frequency-cat-c-light', { '1': { min: 0.87 }, '2': { min: 0.6 }, '3': {} }, 'memory', '3.2.2.1.1'],
+    ['short-period-frequency-cat-c-heavy', { '1': { min: 0.7 }, '2': { min: 0.4 }, '3': {} }, 'memory', '3.2.2.1.1'],
+    // 3.2.1.2 phugoid: zeta >= 0.04 / >= 0; Level 3 time to double >= 55 s (from memory)
+    ['phugoid-damping', { '1': { min: 0.04 }, '2': { min: 0 }, '3': {} }, 'memory', '3.2.1.2'],
+    ['phugoid-time-to-double', { '1': { min: 55 }, '2': { min: 55 }, '3': { min: 55 } }, 'memory', '3.2.1.2'],
+    // 3.3.1.2 roll-mode time constant (seen; Level 3 = 10 s seen in the Cat B row only)
+    ['roll-time-constant-cat-a-light', { '1': { max: 1 }, '2': { max: 1.4 }, '3': { max: 10 } }, 'memory', '3.3.1.2'],
+    ['roll-time-constant-cat-a-heavy', { '1': { max: 1.4 }, '2': { max: 3 }, '3': { max: 10 } }, 'memory', '3.3.1.2'],
+    ['roll-time-constant-cat-b', { '1': { max: 1.4 }, '2': { max: 3 }, '3': { max: 10 } }, 'published', '3.3.1.2'],
+    ['roll-time-constant-cat-c-light', { '1': { max: 1 }, '2': { max: 1.4 }, '3': { max: 10 } }, 'memory', '3.3.1.2'],
+    ['roll-time-constant-cat-c-heavy', { '1': { max: 1.4 }, '2': { max: 3 }, '3': { max: 10 } }, 'memory', '3.3.1.2'],
+    // 3.3.1.3 spiral minimum time to double (seen)
+    ['spiral-time-to-double-cat-a-light', { '1': { min: 12 }, '2': { min: 12 }, '3': { min: 4 } }, 'published', '3.3.1.3'],
+    ['spiral-time-to-double-cat-b-c-light', { '1': { min: 20 }, '2': { min: 12 }, '3': { min: 4 } }, 'published', '3.3.1.3'],
+    ['spiral-time-to-double-heavy', { '1': { min: 20 }, '2': { min: 12 }, '3': { min: 4 } }, 'published', '3.3.1.3'],
+    // 3.3.1.1 Dutch roll (seen, except the Class IV CO/GA row and the |phi/beta| rule: from memory)
+    ['dutch-roll-damping-cat-a', { '1': { min: 0.19 }, '2': { min: 0.02 }, '3': { min: 0 } }, 'published', '3.3.1.1'],
+    ['dutch-roll-damping-cat-a-co-ga-class-iv', { '1': { min: 0.4 }, '2': { min: 0.02 }, '3': { min: 0 } }, 'memory', '3.3.1.1'],
+    ['dutch-roll-damping-cat-b-c', { '1': { min: 0.08 }, '2': { min: 0.02 }, '3': { min: 0 } }, 'published', '3.3.1.1'],
+    ['dutch-roll-damping-frequency-cat-a', { '1': { min: 0.35 }, '2': { min: 0.05 }, '3': { min: 0 } }, 'memory', '3.3.1.1'],
+    ['dutch-roll-damping-frequency-cat-b-c', { '1': { min: 0.15 }, '2': { min: 0.05 }, '3': { min: 0 } }, 'memory', '3.3.1.1'],
+    ['dutch-roll-frequency-cat-a-light', { '1': { min: 1 }, '2': { min: 0.4 }, '3': { min: 0.4 } }, 'published', '3.3.1.1'],
+    ['dutch-roll-frequency-cat-a-heavy', { '1': { min: 0.4 }, '2': { min: 0.4 }, '3': { min: 0.4 } }, 'published', '3.3.1.1'],
+    ['dutch-roll-frequency-cat-b', { '1': { min: 0.4 }, '2': { min: 0.4 }, '3': { min: 0.4 } }, 'published', '3.3.1.1'],
+    ['dutch-roll-frequency-cat-c-light', { '1': { min: 1 }, '2': { min: 0.4 }, '3': { min: 0.4 } }, 'published', '3.3.1.1'],
+    ['dutch-roll-frequency-cat-c-heavy', { '1': { min: 0.4 }, '2': { min: 0.4 }, '3': { min: 0.4 } }, 'published', '3.3.1.1'],
+    // 3.3.1.4 roll-spiral, Cat B and C: zeta omega > 0.5 / 0.3 / 0.15 rad/s (from memory)
+    ['roll-spiral-coupling', { '1': { min: 0.5 }, '2': { min: 0.3 }, '3': { min: 0.15 } }, 'memory', '3.3.1.4'],
+  ];
+
+  it.each(rows)('%s', (id, levels, confidence, paragraph) => {
+    const c = criterion(mil, id);
+    expect(c.levels).toEqual(levels);
+    expect(c.confidence).toBe(confidence);
+    expect(c.source).toBe(`MIL-F-8785C ${paragraph}`);
+    if (confidence === 'memory') expect(c.note).toMatch(/value from memory; verify against the published document/i);
+  });
+
+  it('holds no criterion beyond the rows checked above', () => {
+    expect(mil.criteria.map((c) => c.id).sort()).toEqual(rows.map((r) => r[0]).sort());
+  });
+
+  it('carries the |phi/beta| rise factors k = 0.014 / 0.009 / 0.005 and the Class III zeta cap 0.7 (3.3.1.1, from memory)', () => {
+    for (const id of ['dutch-roll-damping-frequency-cat-a', 'dutch-roll-damping-frequency-cat-b-c']) {
+      expect(criterion(mil, id).params).toEqual({
+        phiBetaThreshold: 20,
+        phiBetaK1: 0.014,
+        phiBetaK2: 0.009,
+        phiBetaK3: 0.005,
+        zetaCap: 0.7,
+        zetaCapClasses: 'III',
+      });
+    }
+  });
+
+  it('maps flight phases to categories (MIL-F-8785C 1.5)', () => {
+    const byCategory = (cat: string) =>
+      Object.entries(mil.phaseCategories)
+        .filter(([, c]) => c === cat)
+        .map(([p]) => p)
+        .sort();
+    expect(byCategory('A')).toEqual(['AR', 'AS', 'CO', 'FF', 'GA', 'RC', 'RR', 'TF', 'WD']);
+    expect(byCategory('B')).toEqual(['AD', 'CL', 'CR', 'D', 'DE', 'ED', 'LO', 'RT']);
+    expect(byCategory('C')).toEqual(['CT', 'L', 'PA', 'TO', 'WO']);
+  });
+
+  it('leaves out the unverified minimum n/alpha lines and says so', () => {
+    expect(mil.notes.join('\n')).toMatch(/minimum n\/alpha lines .* left out/s);
+    expect(mil.defaultRequiredLevel).toBe(1);
+    expect(mil.marginalBand.relative).toBe(0.1);
+  });
+});
+
+describe('civil-dynamic-stability: 14 CFR 23.181 and 25.181', () => {
+  /** zeta for 1/10 amplitude in N cycles: zeta / sqrt(1 - zeta^2) = ln 10 / (2 pi N). */
+  const zetaForTenthIn = (cycles: number) => {
+    const x = Math.LN10 / (2 * Math.PI * cycles);
+    return x / Math.sqrt(1 + x * x);
+  };
+  /** amplitude left after N cycles at damping ratio zeta */
+  const amplitudeAfter = (cycles: number, zeta: number) => Math.exp((-2 * Math.PI * cycles * zeta) / Math.sqrt(1 - zeta * zeta));
+
+  it('1/10 amplitude in 7 cycles is zeta 0.0523; in 13 cycles zeta 0.0282 (14 CFR 23.181)', () => {
+    expect(zetaForTenthIn(7)).toBeCloseTo(0.0523, 4);
+    expect(zetaForTenthIn(13)).toBeCloseTo(0.0282, 4);
+    expect(amplitudeAfter(7, zetaForTenthIn(7))).toBeCloseTo(0.1, 12);
+  });
+
+  it('ships thresholds that meet the rule (rounded up, never below the exact value)', async () => {
+    const { set } = await loadCriteriaSet('test/fixtures/criteria/part23-programme.yaml');
+    const below = criterion(set, 'part23-dutch-roll-below-18000-ft');
+    const above = criterion(set, 'part23-dutch-roll-at-or-above-18000-ft');
+    expect(below.levels).toEqual({ '1': { min: 0.0523 } });
+    expect(above.levels).toEqual({ '1': { min: 0.0282 } });
+    expect(amplitudeAfter(7, 0.0523)).toBeLessThanOrEqual(0.1);
+    expect(amplitudeAfter(13, 0.0282)).toBeLessThanOrEqual(0.1);
+    expect(0.0523 - zetaForTenthIn(7)).toBeLessThan(1e-4);
+    expect(0.0282 - zetaForTenthIn(13)).toBeLessThan(1e-4);
+    // 18,000 ft x 0.3048 m/ft (exact by definition of the international foot)
+    expect(below.applies.altitude?.below).toBeCloseTo(18000 * 0.3048, 9);
+    expect(above.applies.altitude?.atOrAbove).toBeCloseTo(18000 * 0.3048, 9);
+  });
+
+  it('25.181 Dutch roll positively damped: zeta > 0 with the end point excluded, Level 1 only', async () => {
+    const { set } = await loadCriteriaSet('test/fixtures/criteria/part25-programme.yaml');
+    const dr = criterion(set, 'part25-dutch-roll-positively-damped');
+    expect(dr.levels).toEqual({ '1': { min: 0 } });
+    expect(dr.params['strictBounds']).toBe(true);
+  });
+});
