@@ -8,6 +8,7 @@ import type {
   InputFile,
   Level,
   ModalAnalysis,
+  NotApplicable,
   ResolvedCriteriaSet,
   Results,
   VerdictCounts,
@@ -18,6 +19,7 @@ export interface ConditionEvaluation {
   requiredLevel: Level;
   requiredLevelFrom: 'model' | 'criteria default';
   findings: Finding[];
+  notApplicable: NotApplicable[];
   warnings: string[];
 }
 
@@ -44,6 +46,7 @@ export function assembleCondition(
     coupling: analysis.coupling,
     modes: analysis.modes,
     findings: evaluations.flatMap((e) => e.findings),
+    notApplicable: evaluations.flatMap((e) => e.notApplicable),
     warnings,
     notes: condition.notes,
   };

@@ -206,6 +206,15 @@ export interface Finding {
   method?: string;
 }
 
+/** An applicable criterion that makes no finding in a condition, and why (never a pass). */
+export interface NotApplicable {
+  criterion: string;
+  set: string;
+  title: string;
+  source: string;
+  reason: string;
+}
+
 export interface ConditionResult {
   id: string;
   phase: string;
@@ -223,6 +232,8 @@ export interface ConditionResult {
   coupling: number;
   modes: Mode[];
   findings: Finding[];
+  /** applicable criteria that make no finding here, with the reason */
+  notApplicable: NotApplicable[];
   warnings: string[];
   /** conversions and defaults applied */
   notes: string[];

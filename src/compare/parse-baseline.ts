@@ -187,6 +187,7 @@ function toConditionResult(c: WrittenCondition): ConditionResult {
     findings,
     warnings: c.warnings ?? [],
     notes: c.notes ?? [],
+    notApplicable: [],
   };
   if (missing.length > 0) result.notes = [...result.notes, `baseline file gave no ${missing.join(', ')}: stand-ins used, not for display`];
   return result;

@@ -13,6 +13,7 @@ import type {
   Mode,
   ResolvedCriteriaSet,
   ResolvedCriterion,
+  NotApplicable,
 } from '../types.js';
 import { evaluators } from './evaluators.js';
 import { expandLevels } from './level-bounds.js';
@@ -23,6 +24,8 @@ export interface ConditionEvaluation {
   requiredLevel: Level;
   requiredLevelFrom: 'model' | 'criteria default';
   findings: Finding[];
+  /** applicable criteria that make no finding here, with the reason (e.g. the mode they govern is absent by design) */
+  notApplicable: NotApplicable[];
   warnings: string[];
 }
 
@@ -51,6 +54,7 @@ export function evaluateCondition(input: {
   const requiredLevelFrom = condition.requiredLevel !== null ? 'model' : 'criteria default';
   const warnings: string[] = [];
   const findings: Finding[] = [];
+  const notApplicable: NotApplicable[] = [];
 
   for (const criterion of set.criteria) {
     if (!selects(criterion, aircraftClass, category, condition.phase)) continue;
@@ -62,6 +66,11 @@ export function evaluateCondition(input: {
       continue;
     }
     const modes = analysis.modes.filter((m) => m.kind === criterion.mode);
+    const absentMeans = criterion.params['notApplicableIfModeAbsent'];
+    if (modes.length === 0 && typeof absentMeans === 'string') {
+      notApplicable.push({ criterion: criterion.id, set: criterion.set, title: criterion.title, source: criterion.source, reason: absentMeans });
+      continue;
+    }
     if (modes.length === 0) {
       findings.push({ ...base, reason: absentModeReason(criterion, analysis) });
       continue;
@@ -72,7 +81,7 @@ export function evaluateCondition(input: {
     for (const mode of modes) findings.push(evaluateOne({ criterion, mode, condition, analysis, aircraftClass, requiredLevel, set }));
   }
   warnings.push(...uncoveredModes(set, analysis, aircraftClass, category, condition.phase));
-  return { category, requiredLevel, requiredLevelFrom, findings, warnings };
+  return { category, requiredLevel, requiredLevelFrom, findings, notApplicable, warnings };
 }
 
 /**

@@ -1,11 +1,13 @@
 /**
  * Parse YAML or JSON text and keep a way back from a field path to its line and column, so
  * that schema problems can be reported at their place. JSON is parsed with JSON.parse (fast,
- * for large sweeps); positions are found lazily, by parsing again with `yaml` only when a
- * problem has to be located.
+ * for large sweeps); positions of values are found by a small scanner over the JSON text, and
+ * only a path that does not resolve (a missing field, placed at its nearest parent) or a key
+ * to point at parses the text again with `yaml`.
  */
 import { isMap, isSeq, LineCounter, parseDocument, visit, type Node, type Scalar } from 'yaml';
 import { InputError, type InputIssue } from '../errors.js';
+import { jsonLocator } from './json-positions.js';
 
 export interface StructuredText {
   /** the parsed value; YAML's special floats (.nan, .inf) come through as numbers */
@@ -30,10 +32,13 @@ export function parseStructuredText(text: string, file: string): StructuredText 
       throw new InputError([jsonSyntaxIssue((err as Error).message, doc, file)]);
     }
     let lazy: ReturnType<typeof parseWithPositions> | undefined;
+    const fast = jsonLocator(text);
     return {
       value,
       file,
       locate: (path) => {
+        const found = fast.locate(path);
+        if (found) return found;
         lazy ??= parseWithPositions(text, file);
         return lazy.locate(path);
       },

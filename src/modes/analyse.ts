@@ -42,7 +42,7 @@ export function analyseModes(system: StateSpace, options: AnalyseOptions): Modal
 function checkSystem(system: StateSpace, options: AnalyseOptions): void {
   const n = system.states.length;
   if (n === 0) throw new InternalError('modal analysis of a model with no states');
-  if (new Set(system.states).size !== n) {
+  if (hasDuplicate(system.states)) {
     throw new InternalError(`duplicate state names: ${system.states.join(', ')}`);
   }
   if (system.A.length !== n || system.A.some((row) => row.length !== n)) {
@@ -59,4 +59,11 @@ function checkSystem(system: StateSpace, options: AnalyseOptions): void {
   if (!(Number.isFinite(options.airspeed) && options.airspeed > 0)) {
     throw new InternalError(`airspeed must be a positive number of m/s, got ${options.airspeed}`);
   }
+}
+
+function hasDuplicate(names: readonly string[]): boolean {
+  for (let i = 1; i < names.length; i += 1) {
+    for (let j = 0; j < i; j += 1) if (names[i] === names[j]) return true;
+  }
+  return false;
 }

@@ -2,9 +2,9 @@
  * Assignment of mode kinds to the roots of one axis: of all ways to give each template at most
  * one candidate (a pair, a real root or two real roots, as the template allows), take the one
  * with the largest summed marking participation, each eigenvalue counting once (a pair counts
- * twice). The search is exhaustive (an axis has a handful of roots) and runs twice: once for
- * the best assignment, once for each kind's best rival, an assignment that gives that kind
- * other roots or none.
+ * twice). The search is exhaustive (an axis has a handful of roots); every complete assignment
+ * is kept so that each kind's best rival (an assignment giving that kind other roots or none)
+ * can be found afterwards.
  */
 import type { ModeTemplate, RootForm } from './mode-templates.js';
 import type { Root } from './roots.js';
@@ -45,52 +45,42 @@ export function assignKinds(roots: readonly Root[], templates: readonly ModeTemp
   const allowed = templates.map(
     (t) => t.needs === undefined || roots.some((r) => t.needs!.some((s) => r.states.includes(s))),
   );
-  const current = new Int32Array(templates.length); // bit mask of the roots given to each template
-  const best = new Int32Array(templates.length);
-  let bestTotal = -Infinity;
-  const rival = new Float64Array(templates.length).fill(-Infinity);
-  let pass: 'best' | 'rival' = 'best';
-
-  const leaf = (total: number): void => {
-    if (pass === 'best') {
-      if (total > bestTotal) {
-        bestTotal = total;
-        best.set(current);
-      }
-      return;
-    }
-    for (let t = 0; t < templates.length; t += 1) {
-      if (current[t] !== best[t] && total > rival[t]!) rival[t] = total;
-    }
-  };
+  const takesPair = templates.map((t) => t.forms.includes('pair'));
+  const takesReal = templates.map((t) => t.forms.includes('real'));
+  const takesTwoReal = templates.map((t) => t.forms.includes('two-real'));
+  const oscillatory = roots.map((r) => r.oscillatory);
+  const size = templates.length;
+  const current: number[] = new Array<number>(size).fill(0); // bit mask of the roots given to each template
+  const leafMasks: number[] = []; // every complete assignment, `size` masks each
+  const leafTotals: number[] = [];
 
   const walk = (t: number, used: number, total: number): void => {
-    if (t === templates.length) {
-      leaf(total);
+    if (t === size) {
+      for (let k = 0; k < size; k += 1) leafMasks.push(current[k]!);
+      leafTotals.push(total);
       return;
     }
     current[t] = 0;
     walk(t + 1, used, total); // this mode absent
     if (!allowed[t]) return;
-    const template = templates[t]!;
     const share = shares[t]!;
     for (let i = 0; i < roots.length; i += 1) {
       const bit = 1 << i;
       if ((used & bit) !== 0) continue;
-      if (roots[i]!.oscillatory) {
-        if (!template.forms.includes('pair')) continue;
+      if (oscillatory[i]) {
+        if (!takesPair[t]) continue;
         current[t] = bit;
         walk(t + 1, used | bit, total + 2 * share[i]!);
         continue;
       }
-      if (template.forms.includes('real')) {
+      if (takesReal[t]) {
         current[t] = bit;
         walk(t + 1, used | bit, total + share[i]!);
       }
-      if (template.forms.includes('two-real')) {
+      if (takesTwoReal[t]) {
         for (let j = i + 1; j < roots.length; j += 1) {
           const bit2 = 1 << j;
-          if ((used & bit2) !== 0 || roots[j]!.oscillatory) continue;
+          if ((used & bit2) !== 0 || oscillatory[j]) continue;
           current[t] = bit | bit2;
           walk(t + 1, used | bit | bit2, total + share[i]! + share[j]!);
         }
@@ -98,10 +88,18 @@ export function assignKinds(roots: readonly Root[], templates: readonly ModeTemp
     }
     current[t] = 0;
   };
+  walk(0, 0, 0);
 
-  walk(0, 0, 0);
-  pass = 'rival';
-  walk(0, 0, 0);
+  let bestLeaf = 0;
+  for (let l = 1; l < leafTotals.length; l += 1) if (leafTotals[l]! > leafTotals[bestLeaf]!) bestLeaf = l;
+  const bestTotal = leafTotals[bestLeaf]!;
+  const best = leafMasks.slice(bestLeaf * size, bestLeaf * size + size);
+  const rival = new Array<number>(size).fill(-Infinity);
+  for (let l = 0; l < leafTotals.length; l += 1) {
+    for (let t = 0; t < size; t += 1) {
+      if (leafMasks[l * size + t] !== best[t] && leafTotals[l]! > rival[t]!) rival[t] = leafTotals[l]!;
+    }
+  }
 
   const picks: Candidate[] = [];
   const rivalTotals: number[] = [];

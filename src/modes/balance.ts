@@ -10,7 +10,7 @@ export interface Balanced {
   /** the balanced matrix B = D^-1 A D */
   matrix: number[][];
   /** the diagonal of D */
-  scale: Float64Array;
+  scale: number[];
 }
 
 const RADIX = 2;
@@ -20,7 +20,7 @@ const IMPROVEMENT = 0.95;
 export function balance(A: readonly (readonly number[])[]): Balanced {
   const n = A.length;
   const a = A.map((row) => row.slice());
-  const scale = new Float64Array(n).fill(1);
+  const scale: number[] = new Array<number>(n).fill(1);
   let done = false;
   while (!done) {
     done = true;

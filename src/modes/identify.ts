@@ -113,56 +113,70 @@ function identifyAxis(
 ): void {
   if (roots.length === 0) return;
   const best = assignKinds(roots, templates);
-  const doubts = new Map<Candidate, string[]>(best.picks.map((pick) => [pick, []]));
+  const picks = best.picks;
+  const doubts: string[][] = picks.map(() => []);
 
-  best.picks.forEach((pick, p) => {
-    const why = doubts.get(pick)!;
+  for (let p = 0; p < picks.length; p += 1) {
+    const pick = picks[p]!;
     if (pick.share < CLEAR_SHARE) {
-      why.push(`its ${pick.template.label} states hold only ${pct(pick.share)} of the participation`);
+      doubts[p]!.push(`its ${pick.template.label} states hold only ${pct(pick.share)} of the participation`);
     }
     const rival = best.rivalTotals[p]!;
     if (best.total - rival < TIE_MARGIN) {
-      why.push(`a different choice of roots scores almost as well (${best.total.toFixed(2)} vs ${rival.toFixed(2)})`);
+      doubts[p]!.push(`a different choice of roots scores almost as well (${best.total.toFixed(2)} vs ${rival.toFixed(2)})`);
     }
-  });
-  checkOrder(best.picks, 'short_period', 'phugoid', doubts);
-  checkOrder(best.picks, 'roll', 'spiral', doubts);
-  if (group === 'longitudinal') checkThirdOscillatoryMode(roots, best.picks, doubts, warnings);
+  }
+  checkOrder(picks, 'short_period', 'phugoid', doubts);
+  checkOrder(picks, 'roll', 'spiral', doubts);
+  if (group === 'longitudinal') checkThirdOscillatoryMode(roots, picks, doubts, warnings);
 
-  const frequencies = best.picks.map((pick) => `${KIND_WORDS[pick.template.kind]} ${formatNumber(characteristicFrequency(pick.roots))}`);
-  for (const pick of best.picks) {
-    const why = doubts.get(pick)!;
+  const frequencies = picks.map((pick) => characteristicFrequency(pick.roots));
+  for (let p = 0; p < picks.length; p += 1) {
+    const pick = picks[p]!;
+    const why = doubts[p]!;
     const kind = pick.template.kind;
-    const ambiguous = why.length > 0 || pick.roots.some((r) => r.groupShare[group] < GROUP_DOMINANCE);
+    let ambiguous = why.length > 0;
+    for (const root of pick.roots) if (root.groupShare[group] < GROUP_DOMINANCE) ambiguous = true;
     let basis =
-      `${formLabel(pick.roots)}; ${rootSummary(pick.roots[0]!)}; ${pick.template.label} states hold ${pct(pick.share)}` +
-      `; frequencies [rad/s]: ${frequencies.join(', ')}`;
+      `${formLabel(pick.roots)}; ${rootSummary(pick.roots[0]!)}; ${pick.template.label} states hold ` +
+      `${pct(pick.share)}; ${frequencyRank(frequencies, p, GROUP_WORDS[group])}`;
     if (kind === 'dutch_roll') basis += bankToSideslip(pick.roots[0]!, context.airspeed);
     if (why.length > 0) {
-      warnings.push(`${KIND_WORDS[kind]} identification is not clear-cut: ${why.join('; ')}`);
-      basis += `; uncertain: ${why.join('; ')}`;
+      const reasons = why.join('; ');
+      warnings.push(`${KIND_WORDS[kind]} identification is not clear-cut: ${reasons}`);
+      basis += `; uncertain: ${reasons}`;
     }
     modes.push(buildMode(kind, pick.roots, basis, ambiguous));
   }
 
   for (const root of roots) {
-    if (best.picks.some((pick) => pick.roots.includes(root))) continue;
+    if (picks.some((pick) => pick.roots.includes(root))) continue;
     warnings.push(`${GROUP_WORDS[group]} root ${formatRoot(root.value)} fits none of the ${GROUP_WORDS[group]} modes; reported as other`);
     modes.push(buildMode('other', [root], `${formLabel([root])}; ${rootSummary(root)}; left over after the ${GROUP_WORDS[group]} modes were assigned`, true));
   }
 }
 
+/** "fastest of 3 lateral-directional modes", by characteristic frequency. */
+function frequencyRank(frequencies: readonly number[], p: number, axisWords: string): string {
+  const count = frequencies.length;
+  if (count === 1) return `the only ${axisWords} mode found`;
+  let faster = 0;
+  for (const f of frequencies) if (f > frequencies[p]!) faster += 1;
+  const place = faster === 0 ? 'fastest' : faster === count - 1 ? 'slowest' : `number ${faster + 1} by speed`;
+  return `${place} of ${count} ${axisWords} modes`;
+}
+
 /** The faster mode of a pair of kinds must have the higher characteristic frequency. */
-function checkOrder(picks: readonly Candidate[], fast: ModeKind, slow: ModeKind, doubts: Map<Candidate, string[]>): void {
-  const a = picks.find((p) => p.template.kind === fast);
-  const b = picks.find((p) => p.template.kind === slow);
-  if (a === undefined || b === undefined) return;
-  const fa = characteristicFrequency(a.roots);
-  const fb = characteristicFrequency(b.roots);
+function checkOrder(picks: readonly Candidate[], fast: ModeKind, slow: ModeKind, doubts: string[][]): void {
+  const a = picks.findIndex((p) => p.template.kind === fast);
+  const b = picks.findIndex((p) => p.template.kind === slow);
+  if (a < 0 || b < 0) return;
+  const fa = characteristicFrequency(picks[a]!.roots);
+  const fb = characteristicFrequency(picks[b]!.roots);
   if (fa > fb) return;
   const text = `the ${KIND_WORDS[fast]} (${formatNumber(fa)} rad/s) is not faster than the ${KIND_WORDS[slow]} (${formatNumber(fb)} rad/s)`;
-  doubts.get(a)!.push(text);
-  doubts.get(b)!.push(text);
+  doubts[a]!.push(text);
+  doubts[b]!.push(text);
 }
 
 /**
@@ -174,7 +188,7 @@ function checkOrder(picks: readonly Candidate[], fast: ModeKind, slow: ModeKind,
 function checkThirdOscillatoryMode(
   roots: readonly Root[],
   picks: readonly Candidate[],
-  doubts: Map<Candidate, string[]>,
+  doubts: string[][],
   warnings: string[],
 ): void {
   const pairs = roots.filter((r) => r.oscillatory);
@@ -189,18 +203,34 @@ function checkThirdOscillatoryMode(
     `the only longitudinal pair ${formatRoot(pair.value)} mixes ${spTemplate!.label} (${pct(sp)}) and ` +
     `${phTemplate!.label} (${pct(ph)}) motion beside real roots: the pattern of a third oscillatory mode near neutral static stability`;
   warnings.push(`longitudinal: ${text}`);
-  for (const pick of picks) doubts.get(pick)!.push('third oscillatory mode present');
+  for (const why of doubts) why.push('third oscillatory mode present');
 }
 
 function buildMode(kind: ModeKind, roots: readonly Root[], basis: string, ambiguous: boolean): Mode {
-  const ordered = [...roots].sort((a, b) => b.value.re - a.value.re);
-  const eigenvalues: Complex[] =
-    ordered.length === 1 && ordered[0]!.oscillatory
-      ? [ordered[0]!.value, { re: ordered[0]!.value.re, im: -ordered[0]!.value.im }]
-      : ordered.map((r) => r.value);
-  // A split mode shows the shape of its least stable root, which governs the response.
-  const { referenceState, shape } = modeShape(ordered[0]!, kind);
-  return { kind, eigenvalues, ...modalFigures(eigenvalues), basis, ambiguous, referenceState, shape };
+  // Least stable root first: a split mode shows its shape, which governs the response.
+  const lead = roots.length === 2 && roots[1]!.value.re > roots[0]!.value.re ? roots[1]! : roots[0]!;
+  let eigenvalues: Complex[];
+  if (roots.length === 2) eigenvalues = [lead.value, (lead === roots[0] ? roots[1]! : roots[0]!).value];
+  else if (lead.oscillatory) eigenvalues = [lead.value, { re: lead.value.re, im: -lead.value.im }];
+  else eigenvalues = [lead.value];
+  const figures = modalFigures(eigenvalues);
+  const { referenceState, shape } = modeShape(lead, kind);
+  return {
+    kind,
+    eigenvalues,
+    naturalFrequency: figures.naturalFrequency,
+    dampingRatio: figures.dampingRatio,
+    dampedFrequency: figures.dampedFrequency,
+    period: figures.period,
+    timeConstant: figures.timeConstant,
+    timeToHalf: figures.timeToHalf,
+    timeToDouble: figures.timeToDouble,
+    cyclesToHalf: figures.cyclesToHalf,
+    basis,
+    ambiguous,
+    referenceState,
+    shape,
+  };
 }
 
 function dominantGroup(root: Root): StateGroup {
@@ -227,7 +257,7 @@ function characteristicFrequency(roots: readonly Root[]): number {
 function bankToSideslip(root: Root, airspeed: number): string {
   const size = (state: string): number | null => {
     const k = root.states.indexOf(state);
-    return k < 0 ? null : Math.hypot(root.vector.re[k]!, root.vector.im[k]!);
+    return k < 0 ? null : Math.sqrt(root.vector.re[k]! ** 2 + root.vector.im[k]! ** 2);
   };
   const phi = size('phi');
   const beta = size('beta') ?? (size('v') === null ? null : size('v')! / airspeed);
@@ -236,6 +266,10 @@ function bankToSideslip(root: Root, airspeed: number): string {
 }
 
 function formLabel(roots: readonly Root[]): string {
+  const z = roots[0]!.value;
+  if (roots.length === 1 && roots[0]!.oscillatory) {
+    return `oscillatory pair ${formatRoot(z)} (${formatNumber(magnitude(z))} rad/s)`;
+  }
   if (roots.length === 2) return `two real roots (split) ${formatRoot(roots[0]!.value)}, ${formatRoot(roots[1]!.value)}`;
   return `${roots[0]!.oscillatory ? 'oscillatory pair' : 'real root'} ${formatRoot(roots[0]!.value)}`;
 }
@@ -263,5 +297,5 @@ function groupSummary(root: Root): string {
 }
 
 function magnitude(z: Complex): number {
-  return Math.hypot(z.re, z.im);
+  return Math.sqrt(z.re ** 2 + z.im ** 2);
 }

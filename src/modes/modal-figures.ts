@@ -36,7 +36,7 @@ export function modalFigures(eigenvalues: readonly Complex[]): ModalFigures {
 }
 
 function oscillatoryFigures(root: Complex): ModalFigures {
-  const omegaN = Math.hypot(root.re, root.im);
+  const omegaN = Math.sqrt(root.re ** 2 + root.im ** 2);
   const omegaD = Math.abs(root.im);
   const sigma = root.re;
   return {

@@ -39,7 +39,7 @@ export function modeShape(root: Root, kind: ModeKind): ModeShape {
     const ratioIm = (im * refRe - re * refIm) / refSize2;
     return {
       state,
-      magnitude: Math.hypot(ratioRe, ratioIm),
+      magnitude: Math.sqrt(ratioRe ** 2 + ratioIm ** 2),
       phase: k === reference ? 0 : Math.atan2(ratioIm, ratioRe),
       participation: root.participation[k]!,
     };

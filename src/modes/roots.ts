@@ -17,7 +17,7 @@ export interface Root {
   /** right eigenvector over `states`, in the states' SI units */
   vector: ComplexVector;
   /** participation per state of `states`, summing to 1 */
-  participation: Float64Array;
+  participation: number[];
   /** participation summed per state group */
   groupShare: Record<StateGroup, number>;
 }
@@ -49,7 +49,7 @@ export function collectRoots(A: readonly (readonly number[])[], states: readonly
     }
     for (let j = 0; j < system.n; j += 1) {
       const value = system.values[j]!;
-      const oscillatory = Math.abs(value.im) > REAL_ROOT_TOLERANCE * Math.hypot(value.re, value.im);
+      const oscillatory = Math.abs(value.im) > REAL_ROOT_TOLERANCE * Math.sqrt(value.re ** 2 + value.im ** 2);
       if (oscillatory && value.im < 0) continue;
       const share = participation(system, j);
       const groupShare: Record<StateGroup, number> = { longitudinal: 0, lateral: 0, kinematic: 0, other: 0 };

@@ -11,9 +11,10 @@
 /** Blocks as lists of state indices (ascending within a block), in no particular order. */
 export function structuralBlocks(A: readonly (readonly number[])[]): number[][] {
   const n = A.length;
-  const index = new Int32Array(n).fill(-1);
-  const low = new Int32Array(n);
-  const onStack = new Uint8Array(n);
+  // plain arrays: for the handful of states of a model they are cheaper to make than typed ones
+  const index: number[] = new Array<number>(n).fill(-1);
+  const low: number[] = new Array<number>(n).fill(0);
+  const onStack: boolean[] = new Array<boolean>(n).fill(false);
   const stack: number[] = [];
   const blocks: number[][] = [];
   let counter = 0;
@@ -24,13 +25,13 @@ export function structuralBlocks(A: readonly (readonly number[])[]): number[][] 
     low[v] = counter;
     counter += 1;
     stack.push(v);
-    onStack[v] = 1;
+    onStack[v] = true;
     for (let w = 0; w < n; w += 1) {
       if (w === v || A[w]![v] === 0) continue; // edge v -> w: w depends on v
       if (index[w]! < 0) {
         visit(w);
         if (low[w]! < low[v]!) low[v] = low[w]!;
-      } else if (onStack[w] === 1 && index[w]! < low[v]!) {
+      } else if (onStack[w] && index[w]! < low[v]!) {
         low[v] = index[w]!;
       }
     }
@@ -39,7 +40,7 @@ export function structuralBlocks(A: readonly (readonly number[])[]): number[][] 
       let w: number;
       do {
         w = stack.pop()!;
-        onStack[w] = 0;
+        onStack[w] = false;
         block.push(w);
       } while (w !== v);
       block.sort((a, b) => a - b);

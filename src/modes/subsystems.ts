@@ -28,8 +28,10 @@ export const GROUP_OF_STATE: Readonly<Record<string, StateGroup>> = {
 
 /** Group of a state name; any name not listed (actuator, filter, engine) is "other". */
 export function stateGroup(name: string): StateGroup {
-  return Object.hasOwn(GROUP_OF_STATE, name) ? GROUP_OF_STATE[name]! : 'other';
+  return GROUP_LOOKUP.get(name) ?? 'other';
 }
+
+const GROUP_LOOKUP: ReadonlyMap<string, StateGroup> = new Map(Object.entries(GROUP_OF_STATE));
 
 export function splitSubsystems(states: readonly string[]): Subsystems {
   const out: Subsystems = { longitudinal: [], lateral: [], kinematic: [], other: [] };

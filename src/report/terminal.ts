@@ -9,7 +9,7 @@ import { textTable } from './text-table.js';
 
 export interface TerminalOptions {
   color: boolean;
-  /** which conditions get their tables: all, only those with fail/marginal/not evaluated, or none */
+  /** which conditions get their tables: all, only those with a fail or marginal finding, or none */
   detail: 'all' | 'issues' | 'none';
   /** include the findings tables (false for the `modes` command) */
   findings: boolean;
@@ -49,6 +49,7 @@ export function formatResultsText(results: Results, options: TerminalOptions): s
     if (options.findings) {
       if (c.findings.length === 0) out.push('  (no criterion applies to this condition)');
       else out.push(indent(findingsTable(c, (v, t) => paint(VERDICT_COLOR[v], t))));
+      for (const n of c.notApplicable) out.push(`  not applicable: ${n.criterion} (${n.source}): ${n.reason}`);
     }
     for (const w of c.warnings) out.push(paint('\u001b[33m', `  warning: ${w}`));
   }
@@ -72,7 +73,7 @@ export function formatResultsText(results: Results, options: TerminalOptions): s
 function showCondition(c: ConditionResult, detail: TerminalOptions['detail']): boolean {
   if (detail === 'all') return true;
   if (detail === 'none') return false;
-  return c.findings.some((f) => f.verdict !== 'pass') || c.warnings.length > 0;
+  return c.findings.some((f) => f.verdict === 'fail' || f.verdict === 'marginal');
 }
 
 function conditionHeading(c: ConditionResult): string {

@@ -42,6 +42,7 @@ export function condition(over: Partial<ConditionResult> & Pick<ConditionResult,
   return {
     phase: 'CR',
     category: 'B',
+    notApplicable: [],
     requiredLevel: 1,
     requiredLevelFrom: 'criteria default',
     airspeed: 120,

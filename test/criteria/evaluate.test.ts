@@ -54,12 +54,10 @@ describe('evaluateCondition: phases, categories and selectors', () => {
         'dutch-roll-damping-cat-b-c',
         'dutch-roll-damping-frequency-cat-b-c',
         'dutch-roll-frequency-cat-b',
-        'roll-spiral-coupling',
       ].sort(),
     );
-    expect(cr.findings.filter((f) => f.verdict !== 'pass').map((f) => [f.criterion, f.verdict])).toEqual([
-      ['roll-spiral-coupling', 'not_evaluated'],
-    ]);
+    expect(cr.findings.filter((f) => f.verdict !== 'pass')).toEqual([]);
+    expect(cr.notApplicable.map((n) => n.criterion)).toEqual(['roll-spiral-coupling']);
     expect(evaluate(healthyModes(), { phase: 'PA' }).category).toBe('C');
     expect(evaluate(healthyModes(), { phase: 'CO' }, 'IV').findings.map((f) => f.criterion)).toContain('dutch-roll-damping-cat-a-co-ga-class-iv');
     expect(evaluate(healthyModes(), { phase: 'TF' }, 'IV').findings.map((f) => f.criterion)).not.toContain('dutch-roll-damping-cat-a-co-ga-class-iv');
@@ -133,8 +131,17 @@ describe('evaluateCondition: missing modes and figures are not evaluated, with t
   });
 
   it('no coupled roll-spiral oscillation: the requirement is not applicable (3.3.1.4)', () => {
-    const f = finding(evaluate(healthyModes(), { phase: 'PA' }).findings, 'roll-spiral-coupling');
-    expect(f).toMatchObject({ verdict: 'not_evaluated', reason: 'no coupled roll-spiral oscillation: requirement not applicable' });
+    const r = evaluate(healthyModes(), { phase: 'PA' });
+    expect(r.findings.map((f) => f.criterion)).not.toContain('roll-spiral-coupling');
+    expect(r.notApplicable).toEqual([
+      {
+        criterion: 'roll-spiral-coupling',
+        set: 'mil-f-8785c',
+        title: 'Coupled roll-spiral oscillation, minimum zeta omega_n, Categories B and C',
+        source: 'MIL-F-8785C 3.3.1.4',
+        reason: 'no coupled roll-spiral oscillation (roll and spiral are separate real roots)',
+      },
+    ]);
   });
 
   it('a coupled roll-spiral oscillation in Cat B is judged by zeta omega_n (3.3.1.4, from memory)', () => {

@@ -87,9 +87,11 @@ describe('Navion (Nelson 2nd ed.), Class I', () => {
     expect(f['dutch-roll-damping-frequency-cat-b-c']!.value).toBeCloseTo(0.4867, 4);
     expect(f['dutch-roll-frequency-cat-b']).toMatchObject({ level: 1, verdict: 'pass' });
     expect(f['dutch-roll-frequency-cat-b']!.value).toBeCloseTo(2.3851, 4);
-    // 3.3.1.4: no coupled roll-spiral oscillation
-    expect(f['roll-spiral-coupling']!.verdict).toBe('not_evaluated');
-    expect(r.findings).toHaveLength(10);
+    // 3.3.1.4: no coupled roll-spiral oscillation, so the requirement does not apply
+    expect(f['roll-spiral-coupling']).toBeUndefined();
+    expect(r.notApplicable.map((n) => n.criterion)).toEqual(['roll-spiral-coupling']);
+    expect(r.findings).toHaveLength(9);
+    expect(r.findings.every((x) => x.level === 1 && x.verdict === 'pass')).toBe(true);
   });
 
   it('approach (PA, Category C): every criterion at Level 1', () => {
@@ -107,8 +109,9 @@ describe('Navion (Nelson 2nd ed.), Class I', () => {
     expect(f['roll-time-constant-cat-c-light']!.margin).toBeCloseTo(0.8814, 4);
     // 3.3.1.1 Cat C Class I: omega 2.385 >= 1.0
     expect(f['dutch-roll-frequency-cat-c-light']).toMatchObject({ level: 1, verdict: 'pass' });
-    expect(r.findings.filter((x) => x.verdict !== 'not_evaluated').every((x) => x.level === 1 && x.verdict === 'pass')).toBe(true);
-    expect(r.findings).toHaveLength(11);
+    expect(r.findings.every((x) => x.level === 1 && x.verdict === 'pass')).toBe(true);
+    expect(r.notApplicable.map((n) => n.criterion)).toEqual(['roll-spiral-coupling']);
+    expect(r.findings).toHaveLength(10);
   });
 
   it('a Category A phase (TF): Dutch-roll damping 0.2041 is Level 1 but within 10 % of the 0.19 minimum', () => {

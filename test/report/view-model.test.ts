@@ -85,5 +85,19 @@ describe('buildReportView', () => {
     const issues = buildReportView(fresh.results, fresh.sets, { reportId: 'x', detail: 'issues' });
     expect(issues.conditions.map((c) => c.detailed)).toEqual([false, true, true]);
     expect(issues.conditions[0]!.charts).toEqual([]);
+    expect(issues.conditions[0]!.omission).toMatch(/every finding of this condition passed/);
+    const none = buildReportView(fresh.results, fresh.sets, { reportId: 'x', detail: 'none' });
+    expect(none.conditions.every((c) => !c.detailed && /request/.test(c.omission ?? ''))).toBe(true);
+  });
+
+  it('says when no required level was set rather than inventing one', () => {
+    const fresh = larkspurReview();
+    const c = fresh.results.conditions[0]!;
+    c.requiredLevel = null;
+    c.requiredLevelFrom = null;
+    const v = buildReportView(fresh.results, fresh.sets, { reportId: 'x' });
+    expect(v.conditions[0]!.requiredLevel).toBe('not set');
+    expect(v.conditions[0]!.requiredLevelFrom).toBe('no criteria evaluated');
+    expect(v.requiredLevels).toBe('Level 1 (PA-450, TF-300); not set (CR-6000)');
   });
 });
