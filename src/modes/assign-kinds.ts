@@ -36,82 +36,115 @@ export function markShare(root: Root, marks: readonly string[]): number {
   return sum;
 }
 
-/** Roots are few (an axis has a handful); a bit mask per candidate keeps the search allocation-free. */
+/** Roots are few (an axis has a handful); a bit mask per candidate keeps the search cheap. */
 const MAX_ROOTS = 30;
 
+const PAIR = 1;
+const REAL = 2;
+const TWO_REAL = 4;
+const FORM_BITS: Record<RootForm, number> = { pair: PAIR, real: REAL, 'two-real': TWO_REAL };
+
+/** The state of one exhaustive search, passed down the recursion instead of captured. */
+interface Search {
+  rootCount: number;
+  size: number;
+  oscillatory: boolean[];
+  /** per template, the forms it takes (PAIR | REAL | TWO_REAL), 0 when it cannot exist */
+  forms: number[];
+  /** marking share of root i for template t at t * rootCount + i */
+  shares: number[];
+  current: number[];
+  leafMasks: number[];
+  leafTotals: number[];
+}
+
 export function assignKinds(roots: readonly Root[], templates: readonly ModeTemplate[]): AxisAssignment {
-  if (roots.length > MAX_ROOTS) throw new RangeError(`too many roots on one axis (${roots.length})`);
-  const shares = templates.map((t) => roots.map((root) => markShare(root, t.marks)));
-  const allowed = templates.map(
-    (t) => t.needs === undefined || roots.some((r) => t.needs!.some((s) => r.states.includes(s))),
-  );
-  const takesPair = templates.map((t) => t.forms.includes('pair'));
-  const takesReal = templates.map((t) => t.forms.includes('real'));
-  const takesTwoReal = templates.map((t) => t.forms.includes('two-real'));
-  const oscillatory = roots.map((r) => r.oscillatory);
+  const rootCount = roots.length;
+  if (rootCount > MAX_ROOTS) throw new RangeError(`too many roots on one axis (${rootCount})`);
   const size = templates.length;
-  const current: number[] = new Array<number>(size).fill(0); // bit mask of the roots given to each template
-  const leafMasks: number[] = []; // every complete assignment, `size` masks each
-  const leafTotals: number[] = [];
-
-  const walk = (t: number, used: number, total: number): void => {
-    if (t === size) {
-      for (let k = 0; k < size; k += 1) leafMasks.push(current[k]!);
-      leafTotals.push(total);
-      return;
-    }
-    current[t] = 0;
-    walk(t + 1, used, total); // this mode absent
-    if (!allowed[t]) return;
-    const share = shares[t]!;
-    for (let i = 0; i < roots.length; i += 1) {
-      const bit = 1 << i;
-      if ((used & bit) !== 0) continue;
-      if (oscillatory[i]) {
-        if (!takesPair[t]) continue;
-        current[t] = bit;
-        walk(t + 1, used | bit, total + 2 * share[i]!);
-        continue;
-      }
-      if (takesReal[t]) {
-        current[t] = bit;
-        walk(t + 1, used | bit, total + share[i]!);
-      }
-      if (takesTwoReal[t]) {
-        for (let j = i + 1; j < roots.length; j += 1) {
-          const bit2 = 1 << j;
-          if ((used & bit2) !== 0 || oscillatory[j]) continue;
-          current[t] = bit | bit2;
-          walk(t + 1, used | bit | bit2, total + share[i]! + share[j]!);
-        }
-      }
-    }
-    current[t] = 0;
+  const search: Search = {
+    rootCount,
+    size,
+    oscillatory: roots.map((r) => r.oscillatory),
+    forms: new Array<number>(size),
+    shares: new Array<number>(size * rootCount),
+    current: new Array<number>(size).fill(0),
+    leafMasks: [],
+    leafTotals: [],
   };
-  walk(0, 0, 0);
+  for (let t = 0; t < size; t += 1) {
+    const template = templates[t]!;
+    let forms = 0;
+    if (template.needs === undefined || roots.some((r) => template.needs!.some((s) => r.states.includes(s)))) {
+      for (const form of template.forms) forms |= FORM_BITS[form];
+    }
+    search.forms[t] = forms;
+    for (let i = 0; i < rootCount; i += 1) search.shares[t * rootCount + i] = markShare(roots[i]!, template.marks);
+  }
+  walk(search, 0, 0, 0);
 
+  const { leafMasks, leafTotals } = search;
   let bestLeaf = 0;
   for (let l = 1; l < leafTotals.length; l += 1) if (leafTotals[l]! > leafTotals[bestLeaf]!) bestLeaf = l;
   const bestTotal = leafTotals[bestLeaf]!;
-  const best = leafMasks.slice(bestLeaf * size, bestLeaf * size + size);
-  const rival = new Array<number>(size).fill(-Infinity);
-  for (let l = 0; l < leafTotals.length; l += 1) {
-    for (let t = 0; t < size; t += 1) {
-      if (leafMasks[l * size + t] !== best[t] && leafTotals[l]! > rival[t]!) rival[t] = leafTotals[l]!;
-    }
-  }
-
   const picks: Candidate[] = [];
   const rivalTotals: number[] = [];
-  templates.forEach((template, t) => {
-    const mask = best[t]!;
-    if (mask === 0) return;
-    const chosen = roots.filter((_, i) => (mask & (1 << i)) !== 0);
-    const score = chosen.reduce((s, root) => s + (root.oscillatory ? 2 : 1) * shares[t]![roots.indexOf(root)]!, 0);
+  for (let t = 0; t < size; t += 1) {
+    const mask = leafMasks[bestLeaf * size + t]!;
+    if (mask === 0) continue;
+    let rival = -Infinity;
+    for (let l = 0; l < leafTotals.length; l += 1) {
+      if (leafMasks[l * size + t] !== mask && leafTotals[l]! > rival) rival = leafTotals[l]!;
+    }
+    const chosen: Root[] = [];
+    let score = 0;
+    for (let i = 0; i < rootCount; i += 1) {
+      if ((mask & (1 << i)) === 0) continue;
+      chosen.push(roots[i]!);
+      score += (roots[i]!.oscillatory ? 2 : 1) * search.shares[t * rootCount + i]!;
+    }
     const form: RootForm = chosen.length === 2 ? 'two-real' : chosen[0]!.oscillatory ? 'pair' : 'real';
-    const count = form === 'real' ? 1 : 2;
-    picks.push({ template, form, roots: chosen, share: score / count, score });
-    rivalTotals.push(rival[t]!);
-  });
+    picks.push({ template: templates[t]!, form, roots: chosen, share: score / (form === 'real' ? 1 : 2), score });
+    rivalTotals.push(rival);
+  }
   return { picks, total: bestTotal, rivalTotals };
+}
+
+/** Give template t each allowed candidate of the unused roots in turn (or nothing), then recurse. */
+function walk(search: Search, t: number, used: number, total: number): void {
+  const { size, rootCount, current } = search;
+  if (t === size) {
+    for (let k = 0; k < size; k += 1) search.leafMasks.push(current[k]!);
+    search.leafTotals.push(total);
+    return;
+  }
+  current[t] = 0;
+  walk(search, t + 1, used, total); // this mode absent
+  const forms = search.forms[t]!;
+  if (forms === 0) return;
+  const base = t * rootCount;
+  for (let i = 0; i < rootCount; i += 1) {
+    const bit = 1 << i;
+    if ((used & bit) !== 0) continue;
+    const share = search.shares[base + i]!;
+    if (search.oscillatory[i]) {
+      if ((forms & PAIR) === 0) continue;
+      current[t] = bit;
+      walk(search, t + 1, used | bit, total + 2 * share);
+      continue;
+    }
+    if ((forms & REAL) !== 0) {
+      current[t] = bit;
+      walk(search, t + 1, used | bit, total + share);
+    }
+    if ((forms & TWO_REAL) !== 0) {
+      for (let j = i + 1; j < rootCount; j += 1) {
+        const bit2 = 1 << j;
+        if ((used & bit2) !== 0 || search.oscillatory[j]) continue;
+        current[t] = bit | bit2;
+        walk(search, t + 1, used | bit | bit2, total + share + search.shares[base + j]!);
+      }
+    }
+  }
+  current[t] = 0;
 }

@@ -45,6 +45,8 @@ const GROUP_WORDS: Record<StateGroup, string> = {
   other: 'other-state',
 };
 
+const GROUP_ORDER: readonly StateGroup[] = ['longitudinal', 'lateral', 'kinematic', 'other'];
+
 const KIND_WORDS: Record<ModeKind, string> = {
   short_period: 'short period',
   phugoid: 'phugoid',
@@ -276,24 +278,38 @@ function formLabel(roots: readonly Root[]): string {
 
 function rootSummary(root: Root): string {
   // the (at most three) states above 10 %, largest first, without sorting every state
-  const top: number[] = [];
-  for (let k = 0; k < root.participation.length; k += 1) {
-    if (root.participation[k]! < 0.1) continue;
-    let at = top.length;
-    while (at > 0 && root.participation[top[at - 1]!]! < root.participation[k]!) at -= 1;
-    top.splice(at, 0, k);
-    if (top.length > 3) top.pop();
+  let first = -1;
+  let second = -1;
+  let third = -1;
+  const share = root.participation;
+  for (let k = 0; k < share.length; k += 1) {
+    const x = share[k]!;
+    if (x < 0.1) continue;
+    if (first < 0 || x > share[first]!) {
+      third = second;
+      second = first;
+      first = k;
+    } else if (second < 0 || x > share[second]!) {
+      third = second;
+      second = k;
+    } else if (third < 0 || x > share[third]!) {
+      third = k;
+    }
   }
-  const named = top.map((k) => `${root.states[k]} ${pct(root.participation[k]!)}`);
-  return `${groupSummary(root)}; dominant ${named.join(', ')}`;
+  let named = first < 0 ? 'none above 10 %' : `${root.states[first]} ${pct(share[first]!)}`;
+  if (second >= 0) named += `, ${root.states[second]} ${pct(share[second]!)}`;
+  if (third >= 0) named += `, ${root.states[third]} ${pct(share[third]!)}`;
+  return `${groupSummary(root)}; dominant ${named}`;
 }
 
 function groupSummary(root: Root): string {
-  const parts: string[] = [];
-  for (const group of ['longitudinal', 'lateral', 'kinematic', 'other'] as const) {
-    if (root.groupShare[group] >= 0.005) parts.push(`${pct(root.groupShare[group])} ${GROUP_WORDS[group]}`);
+  let text = '';
+  for (const group of GROUP_ORDER) {
+    const share = root.groupShare[group];
+    if (share < 0.005) continue;
+    text += `${text === '' ? '' : ', '}${pct(share)} ${GROUP_WORDS[group]}`;
   }
-  return `${parts.join(', ')} participation`;
+  return `${text} participation`;
 }
 
 function magnitude(z: Complex): number {

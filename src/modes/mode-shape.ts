@@ -31,20 +31,24 @@ export function modeShape(root: Root, kind: ModeKind): ModeShape {
   const refRe = root.vector.re[reference]!;
   const refIm = root.vector.im[reference]!;
   const refSize2 = refRe * refRe + refIm * refIm;
-  const shape: StateShare[] = root.states.map((state, k) => {
+  const shape: StateShare[] = [];
+  for (let k = 0; k < root.states.length; k += 1) {
     // v_k / v_ref = v_k conj(v_ref) / |v_ref|^2
     const re = root.vector.re[k]!;
     const im = root.vector.im[k]!;
     const ratioRe = (re * refRe + im * refIm) / refSize2;
     const ratioIm = (im * refRe - re * refIm) / refSize2;
-    return {
-      state,
-      magnitude: Math.sqrt(ratioRe ** 2 + ratioIm ** 2),
+    const entry: StateShare = {
+      state: root.states[k]!,
+      magnitude: Math.sqrt(ratioRe * ratioRe + ratioIm * ratioIm),
       phase: k === reference ? 0 : Math.atan2(ratioIm, ratioRe),
       participation: root.participation[k]!,
     };
-  });
-  shape.sort((a, b) => b.participation - a.participation);
+    // insertion keeps the largest participation first (a mode has a handful of states)
+    let at = shape.length;
+    while (at > 0 && shape[at - 1]!.participation < entry.participation) at -= 1;
+    shape.splice(at, 0, entry);
+  }
   return { referenceState: root.states[reference]!, shape };
 }
 

@@ -9,6 +9,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import puppeteer, { type Browser } from 'puppeteer-core';
+import { InputError } from '../errors.js';
 
 export interface PdfOptions {
   /** path of the Chromium executable (see findBrowser) */
@@ -43,6 +44,25 @@ function headerFooter(options: PdfOptions): { headerTemplate: string; footerTemp
   };
 }
 
+/** A browser that will not start is the user's environment to fix (exit 2), not a bug. */
+async function launchBrowser(launchOptions: Parameters<typeof puppeteer.launch>[0], executable: string): Promise<Browser> {
+  try {
+    return await puppeteer.launch(launchOptions);
+  } catch (err) {
+    const first = String((err as Error)?.message ?? err).split('\n')[0];
+    throw new InputError([
+      {
+        file: '<command line>',
+        field: '--browser',
+        message: `the browser ${executable} did not start (${first}); install the Debian package chromium (apt-get install -y chromium) or pass --browser <path>`,
+        expected: 'a working Chromium or Chrome executable',
+        found: JSON.stringify(executable),
+        code: 'browser_failed',
+      },
+    ]);
+  }
+}
+
 /** A4 or Letter, portrait, with room for the header and footer lines. */
 export async function renderPdf(html: string, options: PdfOptions): Promise<Buffer> {
   const work = await mkdtemp(join(tmpdir(), 'modalgate-pdf-'));
@@ -54,7 +74,7 @@ export async function renderPdf(html: string, options: PdfOptions): Promise<Buff
     const pagePath = join(work, 'report.html');
     await writeFile(pagePath, html, 'utf8');
     const pageUrl = pathToFileURL(pagePath).href;
-    browser = await puppeteer.launch({
+    browser = await launchBrowser({
       executablePath: options.browser,
       headless: true,
       userDataDir: join(work, 'profile'),
@@ -68,7 +88,7 @@ export async function renderPdf(html: string, options: PdfOptions): Promise<Buff
         XDG_RUNTIME_DIR: join(work, 'run'),
       },
       timeout: 30_000,
-    });
+    }, options.browser);
     const page = await browser.newPage();
     await page.setJavaScriptEnabled(false);
     await page.setRequestInterception(true);

@@ -3,7 +3,7 @@
  * Verdicts are words with a symbol; colour is added only when asked (a TTY without NO_COLOR)
  * and never carries meaning alone.
  */
-import type { ConditionResult, Results, Verdict } from '../types.js';
+import type { ConditionResult, Finding, Results, Verdict } from '../types.js';
 import { formatEigenvalues, formatSig } from './format-number.js';
 import { textTable } from './text-table.js';
 
@@ -115,7 +115,7 @@ function findingsTable(c: ConditionResult, paintVerdict: (v: Verdict, text: stri
   const rows = c.findings.map((f) => [
     f.criterion,
     `${f.mode.replace('_', ' ')} ${f.quantity.replace(/_/g, ' ')}`,
-    f.value === null ? '-' : `${formatSig(f.value)}${f.unit ? ` ${f.unit}` : ''}`,
+    valueText(f),
     boundsText(f.bounds[String(c.requiredLevel ?? 1) as '1' | '2' | '3']),
     f.level === null ? 'none' : `Level ${f.level}`,
     VERDICT_TEXT[f.verdict],
@@ -139,6 +139,13 @@ function findingsTable(c: ConditionResult, paintVerdict: (v: Verdict, text: stri
       return j === 5 && f ? paintVerdict(f.verdict, padded) : padded;
     },
   );
+}
+
+function valueText(f: Finding): string {
+  // A pass with no value is an unbounded figure (a convergent mode never doubles).
+  if (f.value === null) return f.level !== null ? 'unbounded' : '-';
+  const unit = f.unit && f.unit !== '-' ? ` ${f.unit}` : '';
+  return `${formatSig(f.value)}${unit}`;
 }
 
 function boundsText(b: { min?: number; max?: number } | undefined): string {

@@ -1,0 +1,173 @@
+/**
+ * The command line end to end, in-process (main() with captured output) and once as a real
+ * process for the exit code. Contract 3 of the design notes: exit codes 0 / 1 / 2 / 3.
+ */
+import { execFileSync, spawnSync } from 'node:child_process';
+import { copyFileSync, existsSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { main } from '../src/cli.js';
+
+const root = path.resolve(import.meta.dirname, '..');
+const sample = path.join(root, 'samples/ketra-kt4.yaml');
+const marginalOnly = path.join(root, 'test/fixtures/cli/marginal-only.yaml');
+const badAirspeed = path.join(root, 'test/fixtures/cli/bad-airspeed.yaml');
+
+async function run(...argv: string[]) {
+  const out: string[] = [];
+  const err: string[] = [];
+  const code = await main(argv, {
+    out: (t) => out.push(t),
+    err: (t) => err.push(t),
+    color: false,
+    now: () => new Date('2026-12-01T12:00:00Z'),
+  });
+  return { code, out: out.join('\n'), err: err.join('\n') };
+}
+
+function scratch(): string {
+  return mkdtempSync(path.join(tmpdir(), 'modalgate-cli-'));
+}
+
+describe('modalgate check', () => {
+  it('runs the bundled sample: every verdict appears, exit 1 because a finding fails', async () => {
+    const dir = scratch();
+    const json = path.join(dir, 'r.json');
+    const r = await run('check', sample, '--json', json);
+    expect(r.code).toBe(1);
+    expect(r.out).toContain('no --criteria given: using the shipped set mil-f-8785c');
+    expect(r.out).toMatch(/\+ pass/);
+    expect(r.out).toMatch(/~ marginal/);
+    expect(r.out).toMatch(/x FAIL/);
+    const results = JSON.parse(readFileSync(json, 'utf8'));
+    expect(results.format).toBe('modalgate-results/1');
+    expect(results.aircraft).toEqual({ name: 'Ketra KT-4', class: 'I' });
+    expect(results.inputs.map((i: { role: string }) => i.role)).toEqual(['model', 'criteria']);
+    expect(results.inputs[0].sha256).toMatch(/^[0-9a-f]{64}$/);
+    expect(results.conditions.map((c: { id: string }) => c.id)).toEqual(['cruise-3000m', 'formation-2000m', 'approach-300m', 'climb-1500m']);
+    const verdicts = new Set(results.conditions.flatMap((c: { findings: { verdict: string }[] }) => c.findings.map((f) => f.verdict)));
+    expect(verdicts).toEqual(new Set(['pass', 'marginal', 'fail']));
+    // The actuator state of the approach model is an "other" mode, never a flight mode.
+    const approach = results.conditions[2];
+    expect(approach.subsystems.other).toEqual(['de_act']);
+    expect(approach.modes.find((m: { kind: string }) => m.kind === 'other').eigenvalues).toEqual([{ re: -18, im: 0 }]);
+  });
+
+  it('--fail-on marginal turns a marginal finding into exit 1; the default does not', async () => {
+    expect((await run('check', marginalOnly, '--json', path.join(scratch(), 'a.json'))).code).toBe(0);
+    expect((await run('check', marginalOnly, '--fail-on', 'marginal', '--json', path.join(scratch(), 'b.json'))).code).toBe(1);
+  });
+
+  it('writes the HTML beside the model when no output is named, and says where', async () => {
+    const dir = scratch();
+    const model = path.join(dir, 'kestrel.yaml');
+    copyFileSync(marginalOnly, model);
+    const r = await run('check', model);
+    const expected = path.join(dir, 'kestrel.review.html');
+    expect(r.out).toContain(`wrote HTML ${expected}`);
+    expect(readFileSync(expected, 'utf8')).toContain('Test Kestrel');
+  });
+
+  it('bad input: exit 2, the place and the field named, and no output file written or clobbered', async () => {
+    const dir = scratch();
+    const json = path.join(dir, 'r.json');
+    const html = path.join(dir, 'r.html');
+    writeFileSync(html, 'previous report');
+    const r = await run('check', badAirspeed, '--json', json, '--html', html);
+    expect(r.code).toBe(2);
+    expect(r.err).toContain(`${badAirspeed}:7:15: conditions[0].airspeed:`);
+    expect(r.err).toContain('found "fast"');
+    expect(r.err).toContain('nothing was written');
+    expect(existsSync(json)).toBe(false);
+    expect(readFileSync(html, 'utf8')).toBe('previous report');
+  });
+
+  it('a failure while rendering the PDF leaves every earlier report byte-identical', async () => {
+    const dir = scratch();
+    const html = path.join(dir, 'r.html');
+    const pdf = path.join(dir, 'r.pdf');
+    writeFileSync(html, 'previous html');
+    writeFileSync(pdf, 'previous pdf');
+    const r = await run('check', marginalOnly, '--html', html, '--pdf', pdf, '--browser', '/bin/false');
+    expect(r.code).toBe(2);
+    expect(r.err).toContain('[browser_failed]');
+    expect(readFileSync(html, 'utf8')).toBe('previous html');
+    expect(readFileSync(pdf, 'utf8')).toBe('previous pdf');
+  });
+
+  it('a missing model file and a usage error are exit 2', async () => {
+    const missing = await run('check', path.join(scratch(), 'nope.yaml'));
+    expect(missing.code).toBe(2);
+    expect(missing.err).toMatch(/nope\.yaml.*\[unreadable\]/);
+    expect((await run('check', sample, '--fail-on', 'sometimes')).code).toBe(2);
+    expect((await run('frobnicate')).code).toBe(2);
+  });
+
+  it('--baseline shows what changed since an earlier run', async () => {
+    const dir = scratch();
+    const first = path.join(dir, 'first.json');
+    await run('check', marginalOnly, '--json', first);
+    const second = await run('check', sample, '--json', path.join(dir, 'second.json'), '--baseline', first);
+    expect(second.code).toBe(1);
+    expect(second.out.toLowerCase()).toContain('baseline');
+    const results = JSON.parse(readFileSync(path.join(dir, 'second.json'), 'utf8'));
+    expect(results.inputs.map((i: { role: string }) => i.role)).toContain('baseline');
+  });
+
+  it('--junit writes one test case per condition and criterion, failures for failed findings', async () => {
+    const dir = scratch();
+    const junit = path.join(dir, 'r.xml');
+    const json = path.join(dir, 'r.json');
+    await run('check', sample, '--junit', junit, '--json', json);
+    const xml = readFileSync(junit, 'utf8');
+    const results = JSON.parse(readFileSync(json, 'utf8'));
+    const findings = results.conditions.flatMap((c: { findings: unknown[] }) => c.findings);
+    expect(xml.startsWith('<?xml')).toBe(true);
+    expect((xml.match(/<testcase /g) ?? []).length).toBe(findings.length);
+    expect((xml.match(/<failure /g) ?? []).length).toBe(results.summary.fail);
+  });
+});
+
+describe('modalgate modes and criteria', () => {
+  it('modes prints the modal table and writes results with no findings', async () => {
+    const json = path.join(scratch(), 'm.json');
+    const r = await run('modes', sample, '--json', json);
+    expect(r.code).toBe(0);
+    expect(r.out).toContain('dutch roll');
+    const results = JSON.parse(readFileSync(json, 'utf8'));
+    expect(results.conditions.every((c: { findings: unknown[] }) => c.findings.length === 0)).toBe(true);
+  });
+
+  it('criteria check accepts the shipped programme template; criteria show prints the resolved set', async () => {
+    const check = await run('criteria', 'check', path.join(root, 'criteria/programme-template.yaml'));
+    expect(check.code).toBe(0);
+    expect(check.out).toMatch(/valid; set .* \(mil-f-8785c > /);
+    const show = await run('criteria', 'show', 'mil-f-8785c');
+    expect(show.code).toBe(0);
+    expect(show.out).toContain('dutch-roll-damping-cat-a');
+    expect(show.out).toContain('MIL-F-8785C 3.3.1.1');
+  });
+
+  it('criteria check of a broken file is exit 2 with the place', async () => {
+    const dir = scratch();
+    const bad = path.join(dir, 'bad.yaml');
+    writeFileSync(bad, 'format: modalgate-criteria/1\nid: broken\ntitle: Broken\ncriteria: 12\n');
+    const r = await run('criteria', 'check', bad);
+    expect(r.code).toBe(2);
+    expect(r.err).toContain(`${bad}:4:`);
+  });
+});
+
+describe('the installed command', () => {
+  it('bin/modalgate.js sets the process exit code (2 for bad input)', () => {
+    const r = spawnSync(process.execPath, [path.join(root, 'bin/modalgate.js'), 'check', badAirspeed], { encoding: 'utf8' });
+    expect(r.status).toBe(2);
+    expect(r.stderr).toContain('conditions[0].airspeed');
+  });
+
+  it('--help lists the commands', () => {
+    const text = execFileSync(process.execPath, [path.join(root, 'bin/modalgate.js'), '--help'], { encoding: 'utf8' });
+    for (const command of ['check', 'modes', 'criteria']) expect(text).toContain(command);
+  });
+});
