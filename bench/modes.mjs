@@ -1,8 +1,8 @@
 // Benchmark of the modal analysis: analyseModes on 10,000 perturbed 8-state conditions
-// (longitudinal u, w, q, theta and lateral beta, p, r, phi blocks of a light aeroplane of our
-// own, derivatives perturbed by up to +/-15 %), timed end to end from a StateSpace to the
-// identified modes with their figures. Build first: npx tsc -p tsconfig.build.json
-// Target: at most 25 us per condition.
+// (longitudinal u, w, q, theta and lateral beta, p, r, phi blocks with rounded, Navion-like
+// light-aeroplane derivatives, each perturbed by up to +/-15 %), timed end to end from a
+// StateSpace to the identified modes with their figures and basis text.
+// Build first: npx tsc -p tsconfig.build.json. Target: at most 25 us per condition.
 import { analyseModes } from '../dist/modes/analyse.js';
 
 const CONDITIONS = 10_000;
@@ -20,7 +20,7 @@ function generator(seed) {
   };
 }
 
-// Nominal dimensional derivatives (SI) of the invented aeroplane at V = 55 m/s.
+// Nominal dimensional derivatives (SI, stability axes) at V = 55 m/s; only their magnitudes matter here.
 const V = 55;
 const G = 9.80665;
 const LON = { Xu: -0.045, Xw: 0.036, Zu: -0.37, Zw: -2.0, Mu: 0, Mw: -0.16, Mwdot: -0.017, Mq: -2.1 };

@@ -5,8 +5,7 @@
  */
 import { InputError, type InputIssue } from './errors.js';
 import { loadCriteriaSet } from './load/criteria-file.js';
-import { parseModel } from './load/model-file.js';
-import { readInputFile } from './load/read-file.js';
+import { loadModel } from './load/load-model.js';
 import { analyseModes } from './modes/analyse.js';
 import { evaluateCondition } from './criteria/evaluate.js';
 import { assembleCondition, assembleResults } from './results.js';
@@ -32,8 +31,7 @@ export interface CheckOutcome {
 }
 
 export async function runCheck(request: CheckRequest): Promise<CheckOutcome> {
-  const modelFile = await readInputFile(request.model);
-  const model = parseModel(modelFile.text, modelFile.path);
+  const { model, files: modelFiles } = await loadModel(request.model);
   const loaded = await Promise.all(request.criteria.map((ref) => loadCriteriaSet(ref)));
   const sets = loaded.map((l) => l.set);
 
@@ -56,7 +54,7 @@ export async function runCheck(request: CheckRequest): Promise<CheckOutcome> {
   if (issues.length > 0) throw new InputError(dedupeIssues(issues));
 
   const inputs: InputFile[] = [
-    { role: 'model', path: modelFile.path, sha256: modelFile.sha256 },
+    ...modelFiles,
     ...loaded.flatMap((l) => l.files.map((f) => ({ role: 'criteria' as const, path: f.path, sha256: f.sha256 }))),
   ];
   const results = assembleResults({ request, model, sets, inputs, conditions });

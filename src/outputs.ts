@@ -7,11 +7,11 @@ import type { CheckOutcome } from './check.js';
 import type { Comparison } from './compare/compare-results.js';
 import { findBrowser } from './report/browser.js';
 import { renderHtml } from './report/html.js';
-import { renderResultsJson } from './report/json.js';
+import { resultsJsonChunks } from './report/json.js';
 import { renderJunit } from './report/junit.js';
 import { renderPdf } from './report/pdf.js';
 import { buildReportView } from './report/view-model.js';
-import { writeFileAtomic } from './report/write-atomic.js';
+import { writeFileAtomic, type Chunks } from './report/write-atomic.js';
 
 export interface OutputRequest {
   html?: string;
@@ -28,7 +28,7 @@ export interface OutputRequest {
 export interface Artifact {
   kind: 'html' | 'pdf' | 'json' | 'junit';
   path: string;
-  data: string | Buffer;
+  data: string | Buffer | Chunks;
 }
 
 /** Stable id of a report: the same inputs and run time give the same id. */
@@ -42,7 +42,7 @@ export function reportIdOf(outcome: CheckOutcome): string {
 export async function renderOutputs(outcome: CheckOutcome, request: OutputRequest): Promise<Artifact[]> {
   const artifacts: Artifact[] = [];
   const { results, sets } = outcome;
-  if (request.json) artifacts.push({ kind: 'json', path: request.json, data: renderResultsJson(results) });
+  if (request.json) artifacts.push({ kind: 'json', path: request.json, data: resultsJsonChunks(results) });
   if (request.junit) artifacts.push({ kind: 'junit', path: request.junit, data: renderJunit(results, { failOn: request.failOn }) });
   if (request.html || request.pdf) {
     const reportId = reportIdOf(outcome);

@@ -143,8 +143,10 @@ export interface Subsystems {
 export interface ModalAnalysis {
   subsystems: Subsystems;
   /**
-   * Coupling between the longitudinal and lateral-directional blocks: the largest
-   * cross-block entry of A scaled by the diagonal blocks (dimensionless, 0 = decoupled).
+   * Coupling between the longitudinal and lateral-directional blocks: the largest relative
+   * shift of any root when the cross blocks of A are set to zero, |lambda - lambda0| /
+   * max(|lambda0|, 1e-4 x spectral radius) (dimensionless, 0 = decoupled; invariant to state
+   * scaling). See src/modes/subsystems.ts.
    */
   coupling: number;
   /** true when the blocks are decoupled within tolerance (symmetry assumption holds) */

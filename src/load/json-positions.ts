@@ -40,7 +40,7 @@ export function jsonLocator(text: string): JsonLocator {
     const c = text.charCodeAt(i);
     if (c === 0x22) return skipString(i);
     if (c !== 0x7b && c !== 0x5b) {
-      while (i < text.length && !',}] \n\r\t'.includes(text[i]!)) i++;
+      while (i < text.length && !isDelimiter(text.charCodeAt(i))) i++;
       return i;
     }
     let depth = 0;
@@ -108,6 +108,11 @@ export function jsonLocator(text: string): JsonLocator {
       return position(at);
     },
   };
+}
+
+/** , } ] and JSON white space end a number, true, false or null */
+function isDelimiter(c: number): boolean {
+  return c === 0x2c || c === 0x7d || c === 0x5d || c === 0x20 || c === 0x0a || c === 0x0d || c === 0x09;
 }
 
 function lineStartsOf(text: string): number[] {

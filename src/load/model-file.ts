@@ -1,18 +1,44 @@
 /**
  * Load a model file (`format: modalgate-model/1`, YAML or JSON) into the normalised, SI
- * AircraftModel. Pure: text in, model out. Every problem in the file, schema and semantic, is
- * collected and thrown at once as one InputError, sorted by place.
+ * AircraftModel. Pure: text in, model out; a condition table (`conditionTable:`) comes in as
+ * text too, keyed by its `file` as written in the model file. Every problem, schema and
+ * semantic, in the model file and in its table, is collected and thrown at once as one
+ * InputError, sorted by file (model file first) and place.
  */
+import type { z } from 'zod';
 import { formatPath, InputError, type InputIssue } from '../errors.js';
 import { buildCondition, type BuildSettings } from '../model/build-condition.js';
 import type { ModelProblem } from '../model/problem.js';
-import type { AircraftModel, FlightCondition } from '../types.js';
+import type { AircraftModel, FlightCondition, Place } from '../types.js';
 import { defaultGravity, STANDARD_GRAVITY } from '../units.js';
-import { conditionSchema, modelFileSchema } from './model-schema.js';
+import { readConditionTable, type RowPlace } from './condition-table.js';
+import { conditionSchema, conditionTableSchema, modelFileSchema, type WrittenCondition, type WrittenConditionTable } from './model-schema.js';
+import { quickCheck } from './quick-check.js';
 import { parseStructuredText, type StructuredText } from './structured-text.js';
 import { issuesFromZod } from './zod-issues.js';
 
-export function parseModel(text: string, file: string): AircraftModel {
+/** The text of a table named by the model file, and the path to show for it. */
+export interface TableText {
+  path: string;
+  text: string;
+}
+
+/** One condition to check and build, wherever it was written. */
+interface Entry {
+  raw: unknown;
+  /** path prefix of its problems (from the model file root for a written condition, empty for a row) */
+  path: (string | number)[];
+  place: Place;
+  /** fields already reported as unreadable: no second issue for them */
+  unreadable: (string | number)[][];
+  notes: string[];
+  issuesOf(error: z.ZodError): InputIssue[];
+  issueOf(problem: ModelProblem): InputIssue;
+}
+
+const acceptsCondition = quickCheck(conditionSchema);
+
+export function parseModel(text: string, file: string, tables: Record<string, TableText> = {}): AircraftModel {
   const source = parseStructuredText(text, file);
   const issues: InputIssue[] = [];
 
@@ -20,38 +46,55 @@ export function parseModel(text: string, file: string): AircraftModel {
   if (!top.success) issues.push(...issuesFromZod(top.error, source));
 
   const root = isRecord(source.value) ? source.value : {};
-  const rawConditions = Array.isArray(root['conditions']) ? (root['conditions'] as unknown[]) : [];
   const units = top.success ? top.data.units : undefined;
   const settings: BuildSettings | undefined = units && {
     units,
     gravity: top.success && top.data.gravity !== undefined ? top.data.gravity : defaultGravity(units),
     gravityOrigin: top.success && top.data.gravity !== undefined ? 'given in the file' : `default for ${units} input`,
   };
+  if (isRecord(source.value) && root['conditions'] === undefined && root['conditionTable'] === undefined) {
+    issues.push({ file, line: 1, column: 1, field: 'conditions', message: 'no conditions', expected: 'conditions: [..] and/or conditionTable: {..}', found: 'neither', code: 'missing' });
+  }
 
-  issues.push(...duplicateIds(rawConditions, source));
+  const entries: Entry[] = writtenEntries(root, source);
+  // A table is read even under a broken header, so that its problems show too.
+  const table = top.success ? top.data.conditionTable : conditionTableSchema.safeParse(root['conditionTable']).data;
+  if (table) {
+    const read = tableEntries(table, tables, source);
+    // push(...x) would run out of stack for a table of a hundred thousand rows
+    for (const issue of read.issues) issues.push(issue);
+    for (const entry of read.entries) entries.push(entry);
+  }
+  for (const issue of duplicateIds(entries)) issues.push(issue);
 
   const conditions: FlightCondition[] = [];
-  rawConditions.forEach((raw, i) => {
-    const path = ['conditions', i];
-    const parsed = conditionSchema.safeParse(raw);
-    if (!parsed.success) {
-      issues.push(...issuesFromZod(prefixed(parsed.error, path), source));
-      return;
+  for (const entry of entries) {
+    // Most conditions of a large sweep are fine: a quick check lets them skip zod's full parse.
+    let written: WrittenCondition;
+    if (acceptsCondition(entry.raw)) {
+      written = entry.raw as WrittenCondition;
+    } else {
+      const parsed = conditionSchema.safeParse(entry.raw);
+      if (!parsed.success) {
+        issues.push(...entry.issuesOf(withoutUnreadable(parsed.error, entry.unreadable)));
+        continue;
+      }
+      written = parsed.data;
     }
+    if (entry.unreadable.length > 0) continue;
     // Without a valid header the condition is still checked (shapes, forms) so that every
     // problem shows at once; its numbers are read as SI only for that and then dropped.
-    const built = buildCondition(parsed.data, settings ?? CHECK_ONLY, path);
+    const built = buildCondition(written, settings ?? CHECK_ONLY, entry.path);
     if (!built.ok) {
-      issues.push(...built.problems.map((p) => issueFromProblem(p, source)));
-      return;
+      issues.push(...built.problems.map((p) => entry.issueOf(p)));
+      continue;
     }
-    if (!settings) return;
-    const pos = source.locate(path);
-    conditions.push({ ...built.value, place: { file, ...(pos ?? {}) } });
-  });
+    if (!settings) continue;
+    conditions.push({ ...built.value, notes: [...built.value.notes, ...entry.notes], place: entry.place });
+  }
 
   const unique = dedupe(issues);
-  if (unique.length > 0 || !top.success) throw new InputError(sortByPlace(unique));
+  if (unique.length > 0 || !top.success) throw new InputError(sortByPlace(unique, file));
   return {
     file,
     aircraft: { name: top.data.aircraft.name, class: top.data.aircraft.class },
@@ -62,36 +105,92 @@ export function parseModel(text: string, file: string): AircraftModel {
 
 const CHECK_ONLY: BuildSettings = { units: 'SI', gravity: STANDARD_GRAVITY, gravityOrigin: 'check only' };
 
-function duplicateIds(conditions: unknown[], source: StructuredText): InputIssue[] {
-  const seen = new Map<string, number>();
+function writtenEntries(root: Record<string, unknown>, source: StructuredText): Entry[] {
+  const raw = Array.isArray(root['conditions']) ? (root['conditions'] as unknown[]) : [];
+  return raw.map((condition, i) => {
+    const path = ['conditions', i];
+    return {
+      raw: condition,
+      path,
+      get place() {
+        return { file: source.file, ...(source.locate(path) ?? {}) };
+      },
+      unreadable: [],
+      notes: [],
+      issuesOf: (error) => issuesFromZod(prefixed(error, path), source),
+      issueOf: (problem) => issueFromProblem(problem, source),
+    };
+  });
+}
+
+function tableEntries(table: WrittenConditionTable, tables: Record<string, TableText>, source: StructuredText): { entries: Entry[]; issues: InputIssue[] } {
+  const text = tables[table.file];
+  if (!text) {
+    const problem = { path: ['conditionTable', 'file'], message: `table '${table.file}' was not read`, expected: 'its text, passed to parseModel (loadModel reads it)', found: 'nothing', code: 'table_missing' };
+    return { entries: [], issues: [issueFromProblem(problem, source)] };
+  }
+  const read = readConditionTable(table, text);
+  // A wrong column mapping is pointed at by its key (the field path), not by its header.
+  const atKey = (p: ModelProblem) => p.path.length === 3 && p.path[1] === 'columns';
+  const issues = [...read.issues, ...read.problems.map((p) => issueFromProblem(p, source, atKey(p)))];
+  const toIssue = (place: RowPlace, rest: Omit<InputIssue, 'file' | 'line' | 'column' | 'field'>, atKey = false): InputIssue => {
+    if (place.in === 'table') return { file: text.path, line: place.line, ...(place.column !== undefined ? { column: place.column } : {}), field: place.field, ...rest };
+    const pos = (atKey ? source.locateKey?.(place.path) : undefined) ?? source.locate(place.path);
+    return { file: source.file, ...(pos ?? {}), field: place.field, ...rest };
+  };
+  const entries = read.rows.map((row): Entry => ({
+    raw: row.value,
+    path: [],
+    place: { file: text.path, line: row.line },
+    unreadable: row.unreadable,
+    notes: row.notes,
+    issuesOf: (error) =>
+      error.issues.map((zodIssue) => {
+        // An unknown field is placed by its own key, which only common can hold.
+        const unknownKey = zodIssue.code === 'unrecognized_keys' ? (zodIssue as { keys: string[] }).keys[0] : undefined;
+        const path = [...(zodIssue.path as (string | number)[]), ...(unknownKey !== undefined ? [unknownKey] : [])];
+        const one = { issues: [zodIssue] } as unknown as z.ZodError;
+        // issuesFromZod words the issue; the place and field are the row's.
+        const [worded] = issuesFromZod(one, { value: row.value, file: text.path, locate: () => undefined });
+        const { file: _f, line: _l, column: _c, field: _field, ...rest } = worded!;
+        return toIssue(row.placeOf(path), rest, unknownKey !== undefined);
+      }),
+    issueOf: (problem) => {
+      const { path, ...rest } = problem;
+      return toIssue(row.placeOf(path), rest);
+    },
+  }));
+  return { entries, issues };
+}
+
+function duplicateIds(entries: Entry[]): InputIssue[] {
+  const seen = new Map<string, Entry>();
   const out: InputIssue[] = [];
-  conditions.forEach((c, i) => {
-    const id = isRecord(c) ? c['id'] : undefined;
-    if (typeof id !== 'string') return;
+  for (const entry of entries) {
+    const id = isRecord(entry.raw) ? entry.raw['id'] : undefined;
+    if (typeof id !== 'string') continue;
     const first = seen.get(id);
     if (first === undefined) {
-      seen.set(id, i);
-      return;
+      seen.set(id, entry);
+      continue;
     }
-    const firstPos = source.locate(['conditions', first, 'id']);
+    const firstPlace = first.issueOf({ path: [...first.path, 'id'], message: '', code: '' });
+    const where = firstPlace.line === undefined ? formatPath([...first.path]) : `${firstPlace.file === entry.place.file ? '' : `${firstPlace.file} `}line ${firstPlace.line}`;
     out.push(
-      issueFromProblem(
-        {
-          path: ['conditions', i, 'id'],
-          message: `condition id '${id}' is used twice (first at ${firstPos ? `line ${firstPos.line}` : `conditions[${first}]`})`,
-          expected: 'a unique id',
-          found: JSON.stringify(id),
-          code: 'duplicate_id',
-        },
-        source,
-      ),
+      entry.issueOf({
+        path: [...entry.path, 'id'],
+        message: `condition id '${id}' is used twice (first at ${where})`,
+        expected: 'a unique id',
+        found: JSON.stringify(id),
+        code: 'duplicate_id',
+      }),
     );
-  });
+  }
   return out;
 }
 
-function issueFromProblem(problem: ModelProblem, source: StructuredText): InputIssue {
-  const pos = source.locate(problem.path);
+function issueFromProblem(problem: ModelProblem, source: StructuredText, atKey = false): InputIssue {
+  const pos = (atKey ? source.locateKey?.(problem.path) : undefined) ?? source.locate(problem.path);
   return {
     file: source.file,
     ...(pos ?? {}),
@@ -109,18 +208,27 @@ function prefixed<E extends { issues: { path: PropertyKey[] }[] }>(error: E, pre
   return error;
 }
 
+/** A cell that could not be read is reported once, not again as a missing field. */
+function withoutUnreadable(error: z.ZodError, unreadable: (string | number)[][]): z.ZodError {
+  if (unreadable.length === 0) return error;
+  const keep = error.issues.filter((issue) => !unreadable.some((u) => u.every((k, i) => issue.path[i] === k)));
+  return { issues: keep } as unknown as z.ZodError;
+}
+
 function dedupe(issues: InputIssue[]): InputIssue[] {
   const seen = new Set<string>();
   return issues.filter((i) => {
-    const key = `${i.line}:${i.column}:${i.field}:${i.message}:${i.code}`;
+    const key = `${i.file}:${i.line}:${i.column}:${i.field}:${i.message}:${i.code}`;
     if (seen.has(key)) return false;
     seen.add(key);
     return true;
   });
 }
 
-function sortByPlace(issues: InputIssue[]): InputIssue[] {
-  return [...issues].sort((a, b) => (a.line ?? 0) - (b.line ?? 0) || (a.column ?? 0) - (b.column ?? 0));
+/** The model file first, then each table; within a file, by line and column. */
+function sortByPlace(issues: InputIssue[], modelFile: string): InputIssue[] {
+  const order = (f: string) => (f === modelFile ? 0 : 1);
+  return [...issues].sort((a, b) => order(a.file) - order(b.file) || a.file.localeCompare(b.file) || (a.line ?? 0) - (b.line ?? 0) || (a.column ?? 0) - (b.column ?? 0));
 }
 
 function isRecord(x: unknown): x is Record<string, unknown> {

@@ -177,6 +177,37 @@ export const conditionSchema = z
 
 export const MODEL_FORMAT = 'modalgate-model/1';
 
+/**
+ * Conditions from a CSV table beside the model file, one row per condition (an envelope sweep):
+ *
+ *   conditionTable:
+ *     file: sweep.csv                 # relative to the model file
+ *     common:                         # condition fields shared by every row
+ *       stateSpace: { states: [u, w, q, theta] }
+ *     columns:                        # condition field path -> column header
+ *       id: case
+ *       phase: phase
+ *       airspeed: V_tas
+ *       stateSpace.A[u][w]: a_u_w      # matrix entry by row and column names
+ *     ignore: [notes]                 # columns that are read by nobody
+ *
+ * Every row is `common` with its cells written on top, checked exactly like a condition of
+ * `conditions:`; the values are in the file's unit system. A matrix filled in by entries takes
+ * its other entries from `common` when given there, else 0 (noted on every condition). Every
+ * column of the table must be mapped or ignored. In a flow mapping (`{ .. }`) YAML reads `[`
+ * as the start of a list, so write the columns as a block (as above) or quote a key with
+ * brackets. See src/load/condition-table.ts.
+ */
+export const conditionTableSchema = z
+  .object({
+    file: name,
+    /** checked row by row, as part of each condition */
+    common: z.record(z.string(), z.unknown()).optional(),
+    columns: z.record(name, name),
+    ignore: z.array(name).optional(),
+  })
+  .strict();
+
 export const modelFileSchema = z
   .object({
     format: z.literal(MODEL_FORMAT),
@@ -184,15 +215,21 @@ export const modelFileSchema = z
     units: unitSystemSchema,
     /** [acceleration, in the file's units] g for the kinematic terms; default 32.174 ft/s^2 (US) or 9.80665 m/s^2 (SI) */
     gravity: positive.optional(),
-    conditions: z.array(z.unknown()).min(1),
+    /** at least one condition in all, from here and/or from conditionTable */
+    conditions: z.array(z.unknown()).min(1).optional(),
+    conditionTable: conditionTableSchema.optional(),
   })
   .strict();
 
 /** The whole file with its conditions typed (for documentation and JSON Schema export). */
-export const modelFileFullSchema = modelFileSchema.extend({ conditions: z.array(conditionSchema).min(1) });
+export const modelFileFullSchema = modelFileSchema.extend({
+  conditions: z.array(conditionSchema).min(1).optional(),
+  conditionTable: conditionTableSchema.extend({ common: conditionSchema.partial().optional() }).optional(),
+});
 
 export type WrittenModelFile = z.infer<typeof modelFileFullSchema>;
 export type WrittenCondition = z.infer<typeof conditionSchema>;
+export type WrittenConditionTable = z.infer<typeof conditionTableSchema>;
 export type WrittenStateSpace = z.infer<typeof stateSpaceSchema>;
 export type WrittenLongitudinal = z.infer<typeof longitudinalSchema>;
 export type WrittenLateral = z.infer<typeof lateralSchema>;

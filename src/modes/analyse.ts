@@ -45,14 +45,15 @@ function checkSystem(system: StateSpace, options: AnalyseOptions): void {
   if (hasDuplicate(system.states)) {
     throw new InternalError(`duplicate state names: ${system.states.join(', ')}`);
   }
-  if (system.A.length !== n || system.A.some((row) => row.length !== n)) {
-    throw new InternalError(`A must be ${n} x ${n} for states ${system.states.join(', ')}`);
-  }
+  if (system.A.length !== n) throw new InternalError(`A must be ${n} x ${n} for states ${system.states.join(', ')}`);
   for (let i = 0; i < n; i += 1) {
     const row = system.A[i]!;
+    if (row.length !== n) throw new InternalError(`A must be ${n} x ${n} for states ${system.states.join(', ')}`);
     for (let j = 0; j < n; j += 1) {
-      if (!Number.isFinite(row[j])) {
-        throw new InternalError(`A[${system.states[i]}][${system.states[j]}] is not finite (${row[j]})`);
+      const x = row[j]!;
+      if (x - x !== 0) {
+        // NaN and +/-Infinity are the only numbers for which x - x is not 0
+        throw new InternalError(`A[${system.states[i]}][${system.states[j]}] is not finite (${x})`);
       }
     }
   }

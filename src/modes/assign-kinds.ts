@@ -36,8 +36,19 @@ export function markShare(root: Root, marks: readonly string[]): number {
   return sum;
 }
 
-/** Roots are few (an axis has a handful); a bit mask per candidate keeps the search cheap. */
-const MAX_ROOTS = 30;
+/**
+ * The search is exponential in the number of roots; an axis of an aircraft model has a
+ * handful (four or five), so beyond this many only the roots that best resemble some mode
+ * are searched and the rest are left over (and reported by the caller).
+ */
+export const SEARCH_LIMIT = 8;
+
+/**
+ * A root with less than this share in a mode's marking states is not that mode at all; such
+ * candidates are not considered, so that a root is left over (and reported) rather than
+ * forced into a mode it does not resemble.
+ */
+export const MIN_CANDIDATE_SHARE = 0.1;
 
 const PAIR = 1;
 const REAL = 2;
@@ -58,9 +69,9 @@ interface Search {
   leafTotals: number[];
 }
 
-export function assignKinds(roots: readonly Root[], templates: readonly ModeTemplate[]): AxisAssignment {
+export function assignKinds(axisRoots: readonly Root[], templates: readonly ModeTemplate[]): AxisAssignment {
+  const roots = axisRoots.length > SEARCH_LIMIT ? mostModeLike(axisRoots, templates) : axisRoots;
   const rootCount = roots.length;
-  if (rootCount > MAX_ROOTS) throw new RangeError(`too many roots on one axis (${rootCount})`);
   const size = templates.length;
   const search: Search = {
     rootCount,
@@ -127,6 +138,7 @@ function walk(search: Search, t: number, used: number, total: number): void {
     const bit = 1 << i;
     if ((used & bit) !== 0) continue;
     const share = search.shares[base + i]!;
+    if (share < MIN_CANDIDATE_SHARE) continue;
     if (search.oscillatory[i]) {
       if ((forms & PAIR) === 0) continue;
       current[t] = bit;
@@ -140,11 +152,20 @@ function walk(search: Search, t: number, used: number, total: number): void {
     if ((forms & TWO_REAL) !== 0) {
       for (let j = i + 1; j < rootCount; j += 1) {
         const bit2 = 1 << j;
-        if ((used & bit2) !== 0 || search.oscillatory[j]) continue;
+        if ((used & bit2) !== 0 || search.oscillatory[j] || search.shares[base + j]! < MIN_CANDIDATE_SHARE) continue;
         current[t] = bit | bit2;
         walk(search, t + 1, used | bit | bit2, total + share + search.shares[base + j]!);
       }
     }
   }
   current[t] = 0;
+}
+
+function mostModeLike(roots: readonly Root[], templates: readonly ModeTemplate[]): Root[] {
+  const likeness = (root: Root) => Math.max(...templates.map((t) => markShare(root, t.marks)));
+  return roots
+    .map((root) => ({ root, like: likeness(root) }))
+    .sort((a, b) => b.like - a.like)
+    .slice(0, SEARCH_LIMIT)
+    .map((entry) => entry.root);
 }

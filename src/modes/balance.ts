@@ -6,21 +6,22 @@
  * digits on small roots such as the spiral when state scales differ by orders of magnitude.
  * Eigenvectors map back as v_A = D v_B, left eigenvectors as w_A = w_B D^-1.
  */
-export interface Balanced {
-  /** the balanced matrix B = D^-1 A D */
-  matrix: number[][];
-  /** the diagonal of D */
-  scale: number[];
-}
 
 const RADIX = 2;
 /** Stop when a sweep improves the row plus column norm of every state by less than 5 %. */
 const IMPROVEMENT = 0.95;
 
-export function balance(A: readonly (readonly number[])[]): Balanced {
+/**
+ * Writes B = D^-1 A D into `out` (row-major n x n) and the diagonal of D into `scale`; both are
+ * buffers of the caller, so a sweep over thousands of conditions allocates nothing here.
+ */
+export function balanceInto(A: readonly (readonly number[])[], out: Float64Array, scale: Float64Array): void {
   const n = A.length;
-  const a = A.map((row) => row.slice());
-  const scale: number[] = new Array<number>(n).fill(1);
+  for (let i = 0; i < n; i += 1) {
+    const row = A[i]!;
+    for (let j = 0; j < n; j += 1) out[i * n + j] = row[j]!;
+    scale[i] = 1;
+  }
   let done = false;
   while (!done) {
     done = true;
@@ -29,8 +30,8 @@ export function balance(A: readonly (readonly number[])[]): Balanced {
       let row = 0;
       for (let j = 0; j < n; j += 1) {
         if (j === i) continue;
-        column += Math.abs(a[j]![i]!);
-        row += Math.abs(a[i]![j]!);
+        column += Math.abs(out[j * n + i]!);
+        row += Math.abs(out[i * n + j]!);
       }
       if (column === 0 || row === 0) continue;
       const sum = column + row;
@@ -47,10 +48,9 @@ export function balance(A: readonly (readonly number[])[]): Balanced {
       if ((c + row) / f < IMPROVEMENT * sum) {
         done = false;
         scale[i]! *= f;
-        for (let j = 0; j < n; j += 1) a[i]![j]! /= f;
-        for (let j = 0; j < n; j += 1) a[j]![i]! *= f;
+        for (let j = 0; j < n; j += 1) out[i * n + j]! /= f;
+        for (let j = 0; j < n; j += 1) out[j * n + i]! *= f;
       }
     }
   }
-  return { matrix: a, scale };
 }

@@ -8,13 +8,13 @@
  * its conjugate V[:,j] - i V[:,j+1]. Writing the complex eigenvector matrix as Vc = V P with
  * P = [[1, 1], [i, -i]] on each pair gives the left eigenvectors Wc = Vc^-1 = P^-1 V^-1 with
  * P^-1 = 1/2 [[1, -i], [1, i]]: only the real inverse of V is needed (Golub and Van Loan,
- * Matrix Computations, 4th ed., 7.4 and 7.6; the row-j relation Wc A = Lambda Wc defines the
+ * Matrix Computations, 4th ed., ch. 7; the row-j relation Wc A = Lambda Wc defines the
  * left eigenvectors, normalised so that w_j v_j = 1).
  */
-import { EigenvalueDecomposition } from 'ml-matrix';
+import { EigenvalueDecomposition, Matrix } from 'ml-matrix';
 import type { Complex } from '../types.js';
 import { InternalError } from '../errors.js';
-import { balance } from './balance.js';
+import { balanceInto } from './balance.js';
 import { invertInPlace, oneNorm } from './real-inverse.js';
 
 export interface ComplexVector {
@@ -48,14 +48,42 @@ const ROW_SCALE_RANGE = 1e6;
  * Work buffers, reused from call to call: a sweep analyses thousands of small blocks and
  * typed-array allocation would cost more than the arithmetic. Nothing is kept between calls.
  */
-let work = { size: 0, v: new Float64Array(0), scaled: new Float64Array(0), inverse: new Float64Array(0), row: new Float64Array(0), col: new Float64Array(0) };
+let work = emptyBuffers(0);
+
+function emptyBuffers(n: number) {
+  const m = n * n;
+  return {
+    size: n,
+    balanced: new Float64Array(m),
+    scale: new Float64Array(n),
+    v: new Float64Array(m),
+    scaled: new Float64Array(m),
+    inverse: new Float64Array(m),
+    row: new Float64Array(n),
+    col: new Float64Array(n),
+  };
+}
 
 function buffers(n: number): typeof work {
-  if (work.size < n) {
-    const m = n * n;
-    work = { size: n, v: new Float64Array(m), scaled: new Float64Array(m), inverse: new Float64Array(m), row: new Float64Array(n), col: new Float64Array(n) };
-  }
+  if (work.size < n) work = emptyBuffers(n);
   return work;
+}
+
+/**
+ * Input matrices for ml-matrix by size, reused: its constructor from a 2D array checks and
+ * copies row by row, which cost more than the eigen-analysis of a 4 x 4 block.
+ * The decomposition copies its input, so reuse is safe.
+ */
+const inputMatrices = new Map<number, Matrix>();
+
+function inputMatrix(n: number, values: Float64Array): Matrix {
+  let m = inputMatrices.get(n);
+  if (m === undefined) {
+    m = new Matrix(n, n);
+    inputMatrices.set(n, m);
+  }
+  for (let i = 0; i < n; i += 1) for (let j = 0; j < n; j += 1) m.set(i, j, values[i * n + j]!);
+  return m;
 }
 
 /** The eigenvalues as ml-matrix 6 keeps them (d, e); its public getters copy them on each call. */
@@ -68,13 +96,13 @@ export function eigenDecompose(A: readonly (readonly number[])[]): Eigensystem {
   const n = A.length;
   if (n === 1) return scalarSystem(A[0]![0]!);
 
-  const balanced = balance(A);
-  const evd = new EigenvalueDecomposition(balanced.matrix);
+  const { balanced, scale, v, scaled, inverse, row: rowScale, col: colScale } = buffers(n);
+  balanceInto(A, balanced, scale);
+  const evd = new EigenvalueDecomposition(inputMatrix(n, balanced));
   const internals = evd as unknown as EvdInternals;
   const re = internals.d ?? evd.realEigenvalues;
   const im = internals.e ?? evd.imaginaryEigenvalues;
   const V = evd.eigenvectorMatrix;
-  const { v, scaled, inverse, row: rowScale, col: colScale } = buffers(n);
 
   // Equilibrate V (rows by state, then columns by mode) so the singularity test and the
   // conditioning do not depend on state units or on the arbitrary eigenvector scaling.
@@ -82,7 +110,7 @@ export function eigenDecompose(A: readonly (readonly number[])[]): Eigensystem {
   for (let i = 0; i < n; i += 1) {
     let big = 0;
     for (let j = 0; j < n; j += 1) {
-      const x = balanced.scale[i]! * V.get(i, j); // back to the states of A: v_A = D v_B
+      const x = scale[i]! * V.get(i, j); // back to the states of A: v_A = D v_B
       v[i * n + j] = x;
       if (Math.abs(x) > big) big = Math.abs(x);
     }

@@ -12,11 +12,21 @@
  */
 import type { Complex, Mode, ModeKind } from '../types.js';
 import { assignKinds, markShare, type Candidate } from './assign-kinds.js';
-import { formatNumber, formatRoot, pct } from './basis-text.js';
+import {
+  GROUP_WORDS,
+  bankToSideslip,
+  formatNumber,
+  formatRoot,
+  formLabel,
+  frequencyRank,
+  groupSummary,
+  pct,
+  rootSummary,
+} from './basis-text.js';
 import { modalFigures } from './modal-figures.js';
 import { modeShape } from './mode-shape.js';
 import { LATERAL_TEMPLATES, LONGITUDINAL_TEMPLATES, type ModeTemplate } from './mode-templates.js';
-import type { Root } from './roots.js';
+import { leastStable, type Root } from './roots.js';
 import type { StateGroup } from './subsystems.js';
 
 export interface IdentifyContext {
@@ -37,15 +47,6 @@ export const CLEAR_SHARE = 0.5;
 export const TIE_MARGIN = 0.2;
 /** Both marks of a longitudinal pair within this band (around 50 %) signal a third oscillatory mode. */
 const MIXED_PAIR_BAND = [0.3, 0.7] as const;
-
-const GROUP_WORDS: Record<StateGroup, string> = {
-  longitudinal: 'longitudinal',
-  lateral: 'lateral-directional',
-  kinematic: 'kinematic',
-  other: 'other-state',
-};
-
-const GROUP_ORDER: readonly StateGroup[] = ['longitudinal', 'lateral', 'kinematic', 'other'];
 
 const KIND_WORDS: Record<ModeKind, string> = {
   short_period: 'short period',
@@ -89,7 +90,8 @@ export function identifyModes(roots: readonly Root[], context: IdentifyContext):
     const kind: ModeKind = group;
     for (const root of axis[group]) {
       const zero = isNumericalZero(root, roots);
-      const basis = `${formLabel([root])}${zero ? ' at zero' : ''}; ${rootSummary(root)}`;
+      const label = zero ? `real root at zero (|lambda| ${formatNumber(magnitude(root.value))})` : formLabel([root]);
+      const basis = `${label}; ${rootSummary(root)}`;
       modes.push(buildMode(kind, [root], basis, root.groupShare[group] < GROUP_DOMINANCE));
     }
   }
@@ -139,10 +141,11 @@ function identifyAxis(
     const kind = pick.template.kind;
     let ambiguous = why.length > 0;
     for (const root of pick.roots) if (root.groupShare[group] < GROUP_DOMINANCE) ambiguous = true;
+    const lead = leastStable(pick.roots);
     let basis =
-      `${formLabel(pick.roots)}; ${rootSummary(pick.roots[0]!)}; ${pick.template.label} states hold ` +
+      `${formLabel(pick.roots)}; ${rootSummary(lead)}; ${pick.template.label} states hold ` +
       `${pct(pick.share)}; ${frequencyRank(frequencies, p, GROUP_WORDS[group])}`;
-    if (kind === 'dutch_roll') basis += bankToSideslip(pick.roots[0]!, context.airspeed);
+    if (kind === 'dutch_roll') basis += bankToSideslip(lead, context.airspeed);
     if (why.length > 0) {
       const reasons = why.join('; ');
       warnings.push(`${KIND_WORDS[kind]} identification is not clear-cut: ${reasons}`);
@@ -156,16 +159,6 @@ function identifyAxis(
     warnings.push(`${GROUP_WORDS[group]} root ${formatRoot(root.value)} fits none of the ${GROUP_WORDS[group]} modes; reported as other`);
     modes.push(buildMode('other', [root], `${formLabel([root])}; ${rootSummary(root)}; left over after the ${GROUP_WORDS[group]} modes were assigned`, true));
   }
-}
-
-/** "fastest of 3 lateral-directional modes", by characteristic frequency. */
-function frequencyRank(frequencies: readonly number[], p: number, axisWords: string): string {
-  const count = frequencies.length;
-  if (count === 1) return `the only ${axisWords} mode found`;
-  let faster = 0;
-  for (const f of frequencies) if (f > frequencies[p]!) faster += 1;
-  const place = faster === 0 ? 'fastest' : faster === count - 1 ? 'slowest' : `number ${faster + 1} by speed`;
-  return `${place} of ${count} ${axisWords} modes`;
 }
 
 /** The faster mode of a pair of kinds must have the higher characteristic frequency. */
@@ -184,7 +177,7 @@ function checkOrder(picks: readonly Candidate[], fast: ModeKind, slow: ModeKind,
 /**
  * Near neutral static stability one short-period root and one phugoid root can combine into a
  * "third oscillatory mode" (McRuer, Ashkenas and Graham, Aircraft Dynamics and Automatic
- * Control, 1973, ch. 5): one pair mixing both sets of states plus two real roots. Names then
+ * Control, 1973, ch. 5, from memory): one pair mixing both sets of states plus two real roots. Names then
  * stop meaning what the criteria assume.
  */
 function checkThirdOscillatoryMode(
@@ -209,8 +202,8 @@ function checkThirdOscillatoryMode(
 }
 
 function buildMode(kind: ModeKind, roots: readonly Root[], basis: string, ambiguous: boolean): Mode {
-  // Least stable root first: a split mode shows its shape, which governs the response.
-  const lead = roots.length === 2 && roots[1]!.value.re > roots[0]!.value.re ? roots[1]! : roots[0]!;
+  // A split mode lists its least stable root first and shows its shape: it governs the response.
+  const lead = leastStable(roots);
   let eigenvalues: Complex[];
   if (roots.length === 2) eigenvalues = [lead.value, (lead === roots[0] ? roots[1]! : roots[0]!).value];
   else if (lead.oscillatory) eigenvalues = [lead.value, { re: lead.value.re, im: -lead.value.im }];
@@ -253,63 +246,6 @@ function isNumericalZero(root: Root, all: readonly Root[]): boolean {
 function characteristicFrequency(roots: readonly Root[]): number {
   if (roots.length === 2) return Math.sqrt(Math.abs(roots[0]!.value.re * roots[1]!.value.re));
   return magnitude(roots[0]!.value);
-}
-
-/** |phi/beta| of the Dutch roll eigenvector, beta = v / V when the state is v. */
-function bankToSideslip(root: Root, airspeed: number): string {
-  const size = (state: string): number | null => {
-    const k = root.states.indexOf(state);
-    return k < 0 ? null : Math.sqrt(root.vector.re[k]! ** 2 + root.vector.im[k]! ** 2);
-  };
-  const phi = size('phi');
-  const beta = size('beta') ?? (size('v') === null ? null : size('v')! / airspeed);
-  if (phi === null || beta === null || beta === 0) return '';
-  return `; |phi/beta| ${formatNumber(phi / beta)}${root.states.includes('beta') ? '' : ` (beta = v/V, V = ${formatNumber(airspeed)} m/s)`}`;
-}
-
-function formLabel(roots: readonly Root[]): string {
-  const z = roots[0]!.value;
-  if (roots.length === 1 && roots[0]!.oscillatory) {
-    return `oscillatory pair ${formatRoot(z)} (${formatNumber(magnitude(z))} rad/s)`;
-  }
-  if (roots.length === 2) return `two real roots (split) ${formatRoot(roots[0]!.value)}, ${formatRoot(roots[1]!.value)}`;
-  return `${roots[0]!.oscillatory ? 'oscillatory pair' : 'real root'} ${formatRoot(roots[0]!.value)}`;
-}
-
-function rootSummary(root: Root): string {
-  // the (at most three) states above 10 %, largest first, without sorting every state
-  let first = -1;
-  let second = -1;
-  let third = -1;
-  const share = root.participation;
-  for (let k = 0; k < share.length; k += 1) {
-    const x = share[k]!;
-    if (x < 0.1) continue;
-    if (first < 0 || x > share[first]!) {
-      third = second;
-      second = first;
-      first = k;
-    } else if (second < 0 || x > share[second]!) {
-      third = second;
-      second = k;
-    } else if (third < 0 || x > share[third]!) {
-      third = k;
-    }
-  }
-  let named = first < 0 ? 'none above 10 %' : `${root.states[first]} ${pct(share[first]!)}`;
-  if (second >= 0) named += `, ${root.states[second]} ${pct(share[second]!)}`;
-  if (third >= 0) named += `, ${root.states[third]} ${pct(share[third]!)}`;
-  return `${groupSummary(root)}; dominant ${named}`;
-}
-
-function groupSummary(root: Root): string {
-  let text = '';
-  for (const group of GROUP_ORDER) {
-    const share = root.groupShare[group];
-    if (share < 0.005) continue;
-    text += `${text === '' ? '' : ', '}${pct(share)} ${GROUP_WORDS[group]}`;
-  }
-  return `${text} participation`;
 }
 
 function magnitude(z: Complex): number {

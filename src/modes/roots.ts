@@ -66,3 +66,8 @@ export function collectRoots(A: readonly (readonly number[])[], states: readonly
   }
   return { roots, warnings };
 }
+
+/** Of a split mode's two real roots, the one with the larger real part: it governs the response. */
+export function leastStable(roots: readonly Root[]): Root {
+  return roots.length === 2 && roots[1]!.value.re > roots[0]!.value.re ? roots[1]! : roots[0]!;
+}

@@ -26,12 +26,12 @@ export const GROUP_OF_STATE: Readonly<Record<string, StateGroup>> = {
   h: 'kinematic',
 };
 
+const GROUP_LOOKUP: ReadonlyMap<string, StateGroup> = new Map(Object.entries(GROUP_OF_STATE));
+
 /** Group of a state name; any name not listed (actuator, filter, engine) is "other". */
 export function stateGroup(name: string): StateGroup {
   return GROUP_LOOKUP.get(name) ?? 'other';
 }
-
-const GROUP_LOOKUP: ReadonlyMap<string, StateGroup> = new Map(Object.entries(GROUP_OF_STATE));
 
 export function splitSubsystems(states: readonly string[]): Subsystems {
   const out: Subsystems = { longitudinal: [], lateral: [], kinematic: [], other: [] };

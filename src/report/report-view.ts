@@ -2,6 +2,7 @@
  * The review document as the templates see it: every number already formatted, every verdict
  * already a symbol and a word. Templates do no arithmetic and make no decisions.
  */
+import type { Verdict } from '../types.js';
 import type { VerdictMark } from './verdict-marks.js';
 
 export interface VerdictTally {
@@ -72,11 +73,164 @@ export interface ConditionView {
   findings: FindingRow[];
   warnings: string[];
   notes: string[];
+  /** applicable criteria that made no finding here; never counted as a pass */
+  notApplicable: NotApplicableRow[];
   charts: ChartView[];
-  /** false when the options ask for issues only and this condition has none, or for no detail */
-  detailed: boolean;
-  /** why the tables and charts are left out, when they are */
-  omission: string | null;
+  /** why the charts are left out of this section, when they are (large sweeps) */
+  chartsOmitted: string | null;
+}
+
+export interface NotApplicableRow {
+  criterion: string;
+  title: string;
+  source: string;
+  reason: string;
+}
+
+/** One row of "Conditions at a glance". */
+export interface OverviewRow {
+  id: string;
+  /** section anchor, null when the condition has no section */
+  anchor: string | null;
+  phase: string;
+  category: string;
+  airspeed: string;
+  altitude: string;
+  requiredLevel: string;
+  tally: VerdictTally[];
+  mark: VerdictMark;
+}
+
+export interface OverviewView {
+  rows: OverviewRow[];
+  /** said instead of (or after) the rows when the list is cut short */
+  note: string | null;
+}
+
+// ------------------------------------------------------------------ envelope summary
+
+/** One cell of the verdict matrix: a verdict, a declared not-applicable, or a criterion not applied. */
+export interface MatrixCell {
+  /** symbol and letter (greyscale-safe), '·' for not applicable, '' when not applied */
+  text: string;
+  cls: string;
+  state: Verdict | 'not_applicable' | 'not_applied';
+  /** hover text: criterion, value and verdict, or the reason it does not apply */
+  title: string;
+  criterion: string;
+}
+
+export interface MatrixRow {
+  id: string;
+  anchor: string | null;
+  phase: string;
+  airspeed: string;
+  altitude: string;
+  cells: MatrixCell[];
+  mark: VerdictMark;
+}
+
+export interface MatrixChunk {
+  /** mode headings over the numbered columns */
+  groups: { label: string; span: number }[];
+  columns: { number: number; id: string; title: string }[];
+  rows: MatrixRow[];
+}
+
+export interface EnvelopeMatrixView {
+  /** which conditions the rows are and in which order */
+  scope: string;
+  /** wide sets are split into several tables of at most a page's width of columns */
+  chunks: MatrixChunk[];
+  /** "and N more" when the rows were capped */
+  more: string | null;
+}
+
+export interface WorstCaseRow {
+  number: number;
+  criterion: string;
+  set: string;
+  title: string;
+  source: string;
+  memory: boolean;
+  quantity: string;
+  unit: string;
+  /** conditions with a finding of this criterion */
+  evaluated: number;
+  counts: { fail: number; marginal: number; notEvaluated: number; pass: number; notApplicable: number };
+  worst: { condition: string; anchor: string | null; value: string; margin: string; mark: VerdictMark } | null;
+}
+
+export interface CoverageRow {
+  phase: string;
+  category: string;
+  conditions: number;
+  airspeed: string;
+  altitude: string;
+  /** conditions by their worst verdict, worst first */
+  tally: VerdictTally[];
+}
+
+export interface EnvelopeView {
+  conditionCount: number;
+  coverage: CoverageRow[];
+  matrix: EnvelopeMatrixView;
+  worstCases: WorstCaseRow[];
+  trends: ChartView[];
+  /** how the trend charts were drawn (axes, boundaries, merged points) */
+  trendNote: string;
+}
+
+// ------------------------------------------------------------------ baseline comparison
+
+export interface TransitionRow {
+  /** 'worse' | 'better' | 'same' */
+  kind: string;
+  /** ▼ worse, ▲ better, = same: a shape, then the word */
+  symbol: string;
+  word: string;
+  condition: string;
+  anchor: string | null;
+  criterion: string;
+  quantity: string;
+  unit: string;
+  from: VerdictMark;
+  to: VerdictMark;
+  level: string;
+  value: string;
+  delta: string;
+  margin: string;
+}
+
+export interface PresenceRow {
+  condition: string;
+  criterion: string;
+  quantity: string;
+  mark: VerdictMark;
+}
+
+export interface ComparisonView {
+  baseline: { date: string; toolVersion: string; aircraft: string };
+  aircraftChanged: boolean;
+  model: string;
+  criteria: string;
+  inputs: { role: string; name: string; status: string; baselineSha: string; currentSha: string }[];
+  summary: string[];
+  conditionsAdded: { id: string; summary: string }[];
+  conditionsRemoved: { id: string; summary: string }[];
+  conditionsMore: string | null;
+  /** verdict changes, regressions first */
+  transitions: TransitionRow[];
+  transitionsMore: string | null;
+  /** unchanged verdicts whose figure moved, largest relative change first */
+  moved: TransitionRow[];
+  movedMore: string | null;
+  findingsAdded: PresenceRow[];
+  findingsRemoved: PresenceRow[];
+  presenceMore: string | null;
+  criteriaChanges: string[];
+  modeChanges: { condition: string; mode: string; figure: string; change: string; relative: string }[];
+  nothingChanged: boolean;
 }
 
 export interface CriterionNoteView {
@@ -116,6 +270,14 @@ export interface ReportView {
   tally: VerdictTally[];
   totalFindings: number;
   memoryFindings: number;
+  /** what `--detail` left in and out, in words */
+  detail: string;
+  /** shown when there is more than one condition */
+  envelope: EnvelopeView | null;
+  /** shown when a baseline was given */
+  comparison: ComparisonView | null;
+  overview: OverviewView;
+  /** the per-condition sections (see `detail`) */
   conditions: ConditionView[];
   cautions: string[];
   traceability: {

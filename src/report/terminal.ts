@@ -15,6 +15,8 @@ export interface TerminalOptions {
   findings: boolean;
 }
 
+const MAX_LISTED_CONDITIONS = 100;
+
 const VERDICT_TEXT: Record<Verdict, string> = {
   pass: '+ pass',
   marginal: '~ marginal',
@@ -41,9 +43,18 @@ export function formatResultsText(results: Results, options: TerminalOptions): s
     out.push(`criteria: ${results.criteriaSets.map((s) => `${s.id} (${s.chain.join(' > ')})`).join('; ')}`);
   }
   const shown = results.conditions.filter((c) => showCondition(c, options.detail));
-  for (const c of shown) {
+  // With detail 'issues' (the default for sweeps) a condition gets its heading and the
+  // findings that are not a pass; the full tables are in the report and the JSON.
+  const compact = options.detail === 'issues';
+  const listed = compact ? shown.slice(0, MAX_LISTED_CONDITIONS) : shown;
+  for (const c of listed) {
     out.push('');
     out.push(paint('\u001b[1m', conditionHeading(c)));
+    if (compact) {
+      const issues = { ...c, findings: c.findings.filter((f) => f.verdict !== 'pass') };
+      out.push(indent(findingsTable(issues, (v, t) => paint(VERDICT_COLOR[v], t))));
+      continue;
+    }
     for (const n of c.notes) out.push(`  note: ${n}`);
     out.push(indent(modesTable(c)));
     if (options.findings) {
@@ -53,10 +64,14 @@ export function formatResultsText(results: Results, options: TerminalOptions): s
     }
     for (const w of c.warnings) out.push(paint('\u001b[33m', `  warning: ${w}`));
   }
+  if (listed.length < shown.length) {
+    out.push('');
+    out.push(`... and ${shown.length - listed.length} more condition(s) with a fail or marginal finding: see the report or the results JSON`);
+  }
   if (shown.length < results.conditions.length) {
     out.push('');
     out.push(
-      `${results.conditions.length - shown.length} of ${results.conditions.length} conditions not listed (detail: ${options.detail}).`,
+      `${results.conditions.length - shown.length} of ${results.conditions.length} conditions not listed (detail: ${options.detail}${options.detail === 'issues' ? ': only conditions with a fail or marginal finding' : ''}).`,
     );
   }
   if (options.findings) {

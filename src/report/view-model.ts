@@ -2,17 +2,22 @@
  * Results -> ReportView: the one place that decides what the review document says and how
  * each number is printed. Pure: no files, no clock (the date is the run's own generatedAt).
  */
+import type { Comparison } from '../compare/compare-results.js';
 import type {
-  ConditionResult, DynamicsForm, Finding, Mode, ResolvedCriteriaSet, Results, Verdict, VerdictCounts,
+  ConditionResult, DynamicsForm, Finding, Mode, ResolvedCriteriaSet, Results, VerdictCounts,
 } from '../types.js';
 import { STANDING_CAUTIONS } from './cautions.js';
+import { comparisonView } from './comparison/comparison-view.js';
+import { conditionVerdict } from './condition-status.js';
+import { type DetailMode, selectDetail } from './detail-selection.js';
+import { envelopeView } from './envelope/envelope-view.js';
 import { dutchRollChart } from './charts/dutch-roll-chart.js';
 import { sPlaneChart } from './charts/s-plane-chart.js';
 import { shortPeriodChart } from './charts/short-period-chart.js';
 import { safeId } from './charts/svg-kit.js';
 import { categoryLabel, classLabel, MODE_LABEL, QUANTITY_LABEL, QUANTITY_UNIT } from './labels.js';
 import type {
-  ChartView, ConditionView, CriteriaSetView, FindingRow, ModeRow, ReportView, VerdictTally,
+  ChartView, ConditionView, CriteriaSetView, FindingRow, ModeRow, OverviewView, ReportView, VerdictTally,
 } from './report-view.js';
 import { VERDICT_ORDER, verdictMark, worstVerdict } from './verdict-marks.js';
 import { dateText, eigenvalueText, levelBoundsText, lengthText, sig, signedSig, unitText, withUnit } from './view-format.js';
@@ -20,10 +25,19 @@ import { dateText, eigenvalueText, levelBoundsText, lengthText, sig, signedSig, 
 export interface ReportViewOptions {
   reportId: string;
   /** which conditions get full sections; the summary always lists every condition */
-  detail?: 'all' | 'issues' | 'none';
-  /** baseline comparison from the caller; not shown in this version of the document */
-  comparison?: unknown;
+  detail?: DetailMode;
+  /** comparison with a baseline run, shown as "Changes since the baseline" */
+  comparison?: Comparison;
 }
+
+/**
+ * Per-condition charts are the bulk of a section (some 60 kB of SVG); past this many sections
+ * a sweep gets its tables only, and the envelope trend charts show every condition instead.
+ */
+export const SECTION_CHART_CAP = 40;
+
+/** Up to this many conditions "Conditions at a glance" lists each; above, the envelope summary stands for it. */
+export const OVERVIEW_CAP = 60;
 
 const FORM_LABEL: Record<DynamicsForm, string> = {
   stateSpace: 'state-space matrices',
@@ -121,13 +135,10 @@ function subsystemsText(c: ConditionResult): string {
   return parts.join('; ');
 }
 
-function conditionView(c: ConditionResult, index: number, detail: 'all' | 'issues' | 'none'): ConditionView {
-  const verdicts: Verdict[] = c.findings.map((f) => f.verdict);
-  const mark = verdictMark(worstVerdict(verdicts));
-  const detailed = detail === 'all' || (detail === 'issues' && verdicts.some((v) => v !== 'pass'));
+function conditionView(c: ConditionResult, anchor: string, withCharts: boolean, chartsOmitted: string): ConditionView {
   return {
     id: c.id,
-    anchor: `condition-${index + 1}-${safeId(c.id)}`,
+    anchor,
     phase: c.phase,
     category: categoryLabel(c.category),
     airspeed: withUnit(c.airspeed, 'm/s', 4),
@@ -137,15 +148,39 @@ function conditionView(c: ConditionResult, index: number, detail: 'all' | 'issue
     form: FORM_LABEL[c.form],
     subsystems: subsystemsText(c),
     coupling: sig(c.coupling, 2),
-    mark,
+    mark: verdictMark(conditionVerdict(c)),
     tally: tallyOf(countVerdicts(c.findings)),
     modes: c.modes.map(modeRow),
     findings: c.findings.map(findingRow),
+    notApplicable: c.notApplicable.map((n) => ({ criterion: n.criterion, title: n.title, source: n.source, reason: n.reason })),
     warnings: [...c.warnings, ...derivedWarnings(c)],
     notes: c.notes,
-    charts: detailed ? charts(c) : [],
-    detailed,
-    omission: detailed ? null : detail === 'none' ? 'Detail omitted at the request of the caller' : 'Detail omitted: every finding of this condition passed',
+    charts: withCharts ? charts(c) : [],
+    chartsOmitted: withCharts ? null : chartsOmitted,
+  };
+}
+
+function overviewView(results: Results, anchorOf: (index: number) => string | null): OverviewView {
+  const n = results.conditions.length;
+  if (n > OVERVIEW_CAP) {
+    return {
+      rows: [],
+      note: `${n} conditions: too many to list one by one here; the envelope summary gives them by phase and lists those with issues. The results file holds every one.`,
+    };
+  }
+  return {
+    rows: results.conditions.map((c, i) => ({
+      id: c.id,
+      anchor: anchorOf(i),
+      phase: c.phase,
+      category: categoryLabel(c.category),
+      airspeed: withUnit(c.airspeed, 'm/s', 4),
+      altitude: lengthText(c.altitude),
+      requiredLevel: c.requiredLevel === null ? 'not set' : `Level ${c.requiredLevel}`,
+      tally: tallyOf(countVerdicts(c.findings)),
+      mark: verdictMark(conditionVerdict(c)),
+    })),
+    note: null,
   };
 }
 
@@ -176,10 +211,14 @@ function requiredLevelsText(conditions: readonly ConditionResult[]): string {
   const byLevel = new Map<string, string[]>();
   for (const c of conditions) {
     const key = c.requiredLevel === null ? 'not set' : `Level ${c.requiredLevel}`;
-    byLevel.set(key, [...(byLevel.get(key) ?? []), c.id]);
+    const ids = byLevel.get(key);
+    if (ids) ids.push(c.id);
+    else byLevel.set(key, [c.id]);
   }
   if (byLevel.size === 1) return `${[...byLevel.keys()][0] ?? 'not set'} in every condition`;
-  return [...byLevel.entries()].sort(([a], [b]) => a.localeCompare(b)).map(([l, ids]) => `${l} (${ids.join(', ')})`).join('; ');
+  // A sweep would print thousands of ids: name a few, count the rest.
+  const listed = (ids: string[]) => (ids.length <= 8 ? ids.join(', ') : `${ids.slice(0, 6).join(', ')} and ${ids.length - 6} more`);
+  return [...byLevel.entries()].sort(([a], [b]) => a.localeCompare(b)).map(([l, ids]) => `${l} (${listed(ids)})`).join('; ');
 }
 
 /** Shell-style quoting so that the printed command can be pasted back. */
@@ -191,6 +230,19 @@ function commandText(args: readonly string[]): string {
 export function buildReportView(results: Results, sets: ResolvedCriteriaSet[], options: ReportViewOptions): ReportView {
   const allFindings = results.conditions.flatMap((c) => c.findings);
   const counts = countVerdicts(allFindings);
+  const selection = selectDetail(results.conditions, options.detail ?? 'all');
+  const anchors: (string | null)[] = results.conditions.map(() => null);
+  for (const i of selection.detailed) anchors[i] = `condition-${i + 1}-${safeId(results.conditions[i]!.id)}`;
+  const anchorOf = (index: number) => anchors[index] ?? null;
+  const anchorById = new Map<string, string | null>();
+  results.conditions.forEach((c, i) => {
+    if (!anchorById.has(c.id)) anchorById.set(c.id, anchors[i] ?? null);
+  });
+  const sections = selection.detailed.length;
+  const chartsOmitted =
+    `Charts are drawn in the first ${SECTION_CHART_CAP} of the ${sections} condition sections only, to keep a sweep's document small; ` +
+    `this condition's figures are marked in the trend charts of the envelope summary.`;
+  const detailText = `${selection.text}${sections > SECTION_CHART_CAP ? `; charts in the first ${SECTION_CHART_CAP} sections` : ''}.`;
   return {
     reportId: options.reportId,
     title: `${results.aircraft.name}: handling-qualities review`,
@@ -205,7 +257,11 @@ export function buildReportView(results: Results, sets: ResolvedCriteriaSet[], o
     tally: tallyOf(counts),
     totalFindings: allFindings.length,
     memoryFindings: allFindings.filter((f) => f.confidence === 'memory').length,
-    conditions: results.conditions.map((c, i) => conditionView(c, i, options.detail ?? 'all')),
+    detail: detailText.charAt(0).toUpperCase() + detailText.slice(1),
+    envelope: results.conditions.length > 1 ? envelopeView(results.conditions, sets, anchorOf) : null,
+    comparison: options.comparison ? comparisonView(options.comparison, (id) => anchorById.get(id) ?? null) : null,
+    overview: overviewView(results, anchorOf),
+    conditions: selection.detailed.map((i, k) => conditionView(results.conditions[i]!, anchors[i]!, k < SECTION_CHART_CAP, chartsOmitted)),
     cautions: [...STANDING_CAUTIONS],
     traceability: {
       inputs: results.inputs.map((i) => ({ role: i.role, path: i.path, sha256: i.sha256 })),

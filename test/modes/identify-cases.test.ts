@@ -141,6 +141,7 @@ describe('12-state model with heading and position states', () => {
     expect(kinematic).toHaveLength(4);
     expect(kinematic.every((m) => m.eigenvalues.length === 1 && m.eigenvalues[0]!.re === 0)).toBe(true);
     expect(kinematic.map((m) => m.referenceState).sort()).toEqual(['h', 'psi', 'xE', 'yE']);
+    expect(kinematic.every((m) => m.basis.startsWith('real root at zero') && !m.ambiguous)).toBe(true);
     const spirals = ofKind(result.modes, 'spiral');
     expect(spirals).toHaveLength(1);
     // NASA CR-96008 set, spiral root (Nelson, 2nd ed., ch. 5 prints -0.0087)
@@ -255,5 +256,28 @@ describe('the Dutch roll basis reports |phi/beta| whether the state is beta or v
     const ratio = (m: Mode[]) => /\|phi\/beta\| ([0-9.]+)/.exec(ofKind(m, 'dutch_roll')[0]!.basis)![1];
     expect(ratio(withV.modes)).toBe(ratio(withBeta.modes));
     expect(ofKind(withV.modes, 'dutch_roll')[0]!.referenceState).toBe('v');
+  });
+});
+
+describe('other state names and reduced models', () => {
+  it('a [vT, alpha, q, theta] model (alpha = w/u0, vT = u for small perturbations) gives the same modes', () => {
+    // Nelson, 2nd ed., ch. 4: alpha = w/u0 for small perturbations; NASA CR-96008 derivatives.
+    const A = longitudinalA(CR96008_LONGITUDINAL).map((row, i) => row.map((x, j) => (x * (i === 1 ? 1 / U0 : 1)) / (j === 1 ? 1 / U0 : 1)));
+    const result = analyseModes(stateSpace(['vT', 'alpha', 'q', 'theta'], A), { airspeed: AIRSPEED });
+    expect(kinds(result.modes)).toEqual(['short_period', 'phugoid']);
+    expect(Math.abs(ofKind(result.modes, 'short_period')[0]!.eigenvalues[0]!.re + 2.5105)).toBeLessThan(0.00005);
+    expect(ofKind(result.modes, 'phugoid')[0]!.referenceState).toBe('vT');
+  });
+
+  it('a short-period model with attitude [w, q, theta] has no phugoid: the attitude root is left over and reported', () => {
+    // theta feeds nothing when theta0 = 0 (Nelson ch. 4 equations without the u equation)
+    const lon = longitudinalA(CR96008_LONGITUDINAL);
+    const A = [1, 2, 3].map((i) => [1, 2, 3].map((j) => lon[i]![j]!));
+    const result = analyseModes(stateSpace(['w', 'q', 'theta'], A), { airspeed: AIRSPEED });
+    expect(kinds(result.modes)).toEqual(['short_period', 'other']);
+    const [left] = ofKind(result.modes, 'other');
+    expect(left!.ambiguous).toBe(true);
+    expect(left!.eigenvalues).toEqual([{ re: 0, im: 0 }]);
+    expect(result.warnings).toContain('longitudinal root 0 fits none of the longitudinal modes; reported as other');
   });
 });

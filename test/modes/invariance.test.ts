@@ -74,7 +74,7 @@ describe('identification invariance', () => {
         expect(moved.map((m) => [m.kind, m.ambiguous, m.reference])).toEqual(reference.map((m) => [m.kind, m.ambiguous, m.reference]));
         reference.forEach((m, i) => expectSameRoots(moved[i]!.roots, m.roots, 1e-8));
       }),
-      { numRuns: 60 },
+      { numRuns: 60, seed: 20261202 },
     );
   });
 
@@ -90,7 +90,7 @@ describe('identification invariance', () => {
         const TA = multiply(multiply(T, system.A), Ti);
         expectSameRoots(spectrum(TA), spectrum(system.A), 1e-7);
       }),
-      { numRuns: 60 },
+      { numRuns: 60, seed: 20261202 },
     );
   });
 });

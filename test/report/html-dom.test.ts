@@ -105,6 +105,49 @@ describe('HTML report in Chromium', () => {
     await page.close();
   });
 
+  it('shows in each envelope matrix cell the verdict of the finding, in symbol and letter', async () => {
+    const { page } = await open(html, 'report.html');
+    const cells = await page.$$eval('table.matrix tbody tr', (rows) =>
+      rows.flatMap((r) => [...r.querySelectorAll('td.cell')].map((td) => ({
+        condition: r.getAttribute('data-condition'),
+        criterion: td.getAttribute('data-criterion'),
+        text: (td as HTMLElement).innerText.trim(),
+      }))),
+    );
+    // The key printed under the matrix: check mark P pass, half circle M marginal, cross F fail, circle N not evaluated.
+    const expected: Record<string, string> = { pass: '\u2713P', marginal: '\u25d2M', fail: '\u2717F', not_evaluated: '\u25cbN' };
+    for (const c of results.conditions) {
+      const row = cells.filter((x) => x.condition === c.id);
+      for (const f of c.findings) expect(row.find((x) => x.criterion === f.criterion)?.text).toBe(expected[f.verdict]);
+      for (const n of c.notApplicable) expect(row.find((x) => x.criterion === n.criterion)?.text).toBe('\u00b7');
+      const judged = new Set([...c.findings.map((f) => f.criterion), ...c.notApplicable.map((n) => n.criterion)]);
+      for (const x of row) if (!judged.has(x.criterion ?? '')) expect(x.text).toBe('');
+    }
+    expect(new Set(cells.map((x) => x.condition))).toEqual(new Set(results.conditions.map((c) => c.id)));
+    // the matrix is the first section after the title block
+    const order = await page.$$eval('main > *', (els) => els.map((e) => e.className));
+    expect(order.slice(0, 2)).toEqual(['title-block', 'envelope']);
+    await page.close();
+  });
+
+  it('lists the not-applicable criteria under the findings table and does not count them', async () => {
+    const { page } = await open(html, 'report.html');
+    const cruise = await page.$eval('section.condition[id^="condition-1-"]', (s) => ({
+      list: [...s.querySelectorAll('ul.not-applicable li')].map((li) => (li as HTMLElement).innerText),
+      afterFindings: s.querySelector('table.findings ~ ul.not-applicable') !== null,
+      rows: s.querySelectorAll('tr.finding').length,
+    }));
+    expect(cruise.list[0]).toBe('Not applicable: roll-spiral-coupling-bc (MIL-F-8785C 3.3.1.4): no coupled roll-spiral oscillation (roll and spiral are separate real roots)');
+    expect(cruise.afterFindings).toBe(true);
+    expect(cruise.rows).toBe(results.conditions[0]!.findings.length);
+    const tf = await page.$eval('section.condition[id^="condition-3-"]', (s) => s.querySelectorAll('ul.not-applicable').length);
+    expect(tf).toBe(0);
+    const outcome = await page.$eval('.outcome', (o) => (o as HTMLElement).innerText);
+    expect(outcome).toContain(`findings ${findings.length}`);
+    expect(outcome).toMatch(new RegExp(`pass\\s*${findings.filter((f) => f.verdict === 'pass').length}\\b`));
+    await page.close();
+  });
+
   it('shows hostile criteria notes as text', async () => {
     const fresh = larkspurReview();
     fresh.sets[0]!.notes.push('Injected <script>alert(1)</script> here.');

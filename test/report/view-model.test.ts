@@ -83,11 +83,14 @@ describe('buildReportView', () => {
     const fresh = larkspurReview();
     fresh.results.conditions[0]!.findings = fresh.results.conditions[0]!.findings.filter((f) => f.verdict === 'pass');
     const issues = buildReportView(fresh.results, fresh.sets, { reportId: 'x', detail: 'issues' });
-    expect(issues.conditions.map((c) => c.detailed)).toEqual([false, true, true]);
-    expect(issues.conditions[0]!.charts).toEqual([]);
-    expect(issues.conditions[0]!.omission).toMatch(/every finding of this condition passed/);
+    expect(issues.conditions.map((c) => c.id)).toEqual(['PA-450', 'TF-300']);
+    expect(issues.detail).toMatch(/2 of 3; 1 condition whose findings all pass left out/);
+    // the all-pass condition still stands in the summaries, without a link to a section
+    expect(issues.overview.rows.map((r) => r.anchor === null)).toEqual([true, false, false]);
     const none = buildReportView(fresh.results, fresh.sets, { reportId: 'x', detail: 'none' });
-    expect(none.conditions.every((c) => !c.detailed && /request/.test(c.omission ?? ''))).toBe(true);
+    expect(none.conditions).toEqual([]);
+    expect(none.detail).toMatch(/no condition has a section.*3 conditions left out/i);
+    expect(none.envelope?.matrix.chunks[0]?.rows).toHaveLength(3);
   });
 
   it('says when no required level was set rather than inventing one', () => {
