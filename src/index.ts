@@ -3,6 +3,8 @@ export { runCheck, type CheckRequest, type CheckOutcome } from './check.js';
 export { renderOutputs, writeArtifacts, reportIdOf, type OutputRequest, type Artifact } from './outputs.js';
 export { parseModel } from './load/model-file.js';
 export { readInputFile } from './load/read-file.js';
+export { loadModel } from './load/load-model.js';
+export { parseCsv } from './load/csv.js';
 export { loadCriteriaSet } from './load/criteria-file.js';
 export { analyseModes } from './modes/analyse.js';
 export { evaluateCondition } from './criteria/evaluate.js';

@@ -54,6 +54,19 @@ describe('modalgate check', () => {
     expect(approach.modes.find((m: { kind: string }) => m.kind === 'other').eigenvalues).toEqual([{ re: -18, im: 0 }]);
   });
 
+  it('runs the bundled envelope sweep whose conditions come from a CSV table', async () => {
+    const json = path.join(scratch(), 'env.json');
+    const r = await run('check', path.join(root, 'samples/ketra-kt4-envelope.yaml'), '--json', json);
+    expect(r.code).toBe(1);
+    const results = JSON.parse(readFileSync(json, 'utf8'));
+    expect(results.conditions).toHaveLength(30);
+    expect(results.inputs.map((i: { role: string; path: string }) => [i.role, path.basename(i.path)])).toEqual([
+      ['model', 'ketra-kt4-envelope.yaml'],
+      ['table', 'ketra-kt4-envelope.csv'],
+      ['criteria', 'mil-f-8785c.yaml'],
+    ]);
+  });
+
   it('--fail-on marginal turns a marginal finding into exit 1; the default does not', async () => {
     expect((await run('check', marginalOnly, '--json', path.join(scratch(), 'a.json'))).code).toBe(0);
     expect((await run('check', marginalOnly, '--fail-on', 'marginal', '--json', path.join(scratch(), 'b.json'))).code).toBe(1);

@@ -1,0 +1,13 @@
+import puppeteer from 'puppeteer-core';
+const b = await puppeteer.launch({ executablePath: '/usr/bin/chromium', headless: true, args: ['--no-sandbox', '--disable-gpu'] });
+const p = await b.newPage();
+await p.setViewport({ width: 900, height: 1270 });
+const t = performance.now();
+await p.goto('file:///tmp/you/sweep.html', { waitUntil: 'load', timeout: 120000 });
+console.log('load', performance.now() - t);
+await p.screenshot({ path: '/tmp/you/s1.png', clip: { x: 0, y: 0, width: 900, height: 1270 } });
+const y = await p.$eval('.worst-cases', (e) => e.getBoundingClientRect().top + window.scrollY);
+await p.screenshot({ path: '/tmp/you/s2.png', clip: { x: 0, y: y - 600, width: 900, height: 1270 } });
+const y2 = await p.$eval('.trend-grid', (e) => e.getBoundingClientRect().top + window.scrollY);
+await p.screenshot({ path: '/tmp/you/s3.png', clip: { x: 0, y: y2, width: 900, height: 1270 } });
+await b.close();
