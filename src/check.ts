@@ -6,9 +6,8 @@
 import { InputError, type InputIssue } from './errors.js';
 import { loadCriteriaSet } from './load/criteria-file.js';
 import { loadModel } from './load/load-model.js';
-import { analyseModes } from './modes/analyse.js';
-import { evaluateCondition } from './criteria/evaluate.js';
-import { assembleCondition, assembleResults } from './results.js';
+import { assembleResults } from './results.js';
+import { checkAllConditions } from './sweep/check-all.js';
 import type { AircraftModel, InputFile, ResolvedCriteriaSet, Results } from './types.js';
 
 export interface CheckRequest {
@@ -22,6 +21,8 @@ export interface CheckRequest {
   generatedAt: string;
   /** called after each condition (for a progress bar); no effect on the results */
   onProgress?: (done: number, total: number) => void;
+  /** worker threads for the conditions: 0 = none; absent = chosen by their number (no effect on the results) */
+  workers?: number;
 }
 
 export interface CheckOutcome {
@@ -35,21 +36,9 @@ export async function runCheck(request: CheckRequest): Promise<CheckOutcome> {
   const loaded = await Promise.all(request.criteria.map((ref) => loadCriteriaSet(ref)));
   const sets = loaded.map((l) => l.set);
 
-  const issues: InputIssue[] = [];
-  const total = model.conditions.length;
-  const conditions = model.conditions.map((condition, index) => {
-    const analysis = analyseModes(condition.system, { airspeed: condition.airspeed });
-    const evaluations = sets.flatMap((set) => {
-      try {
-        return [evaluateCondition({ aircraftClass: model.aircraft.class, condition, analysis, set })];
-      } catch (err) {
-        if (err instanceof InputError) issues.push(...err.issues);
-        else throw err;
-        return [];
-      }
-    });
-    request.onProgress?.(index + 1, total);
-    return assembleCondition(condition, analysis, evaluations);
+  const { results: conditions, issues } = await checkAllConditions(model, sets, {
+    ...(request.workers !== undefined ? { workers: request.workers } : {}),
+    ...(request.onProgress ? { onProgress: request.onProgress } : {}),
   });
   if (issues.length > 0) throw new InputError(dedupeIssues(issues));
 

@@ -66,7 +66,7 @@ export async function main(argv: string[], io: Io = defaultIo()): Promise<number
     .addOption(new Option('--fail-on <verdict>', 'lowest verdict that makes the exit code 1').choices(['fail', 'marginal']).default('fail'))
     .addOption(new Option('--paper <size>', 'PDF paper size').choices(['A4', 'Letter']).default('A4'))
     .option('--browser <path>', 'Chromium or Chrome executable for the PDF')
-    .addOption(new Option('--detail <which>', 'per-condition detail: all, issues (fail/marginal only) or none').choices(['all', 'issues', 'none']))
+    .addOption(new Option('--detail <which>', 'per-condition detail: all, issues (conditions with a fail, marginal or not-evaluated finding) or none').choices(['all', 'issues', 'none']))
     .action(async (modelPath: string, opts: CheckCommandOptions) => {
       exitCode = await checkCommand(modelPath, opts, argv, io);
     });

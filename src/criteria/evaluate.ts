@@ -16,7 +16,7 @@ import type {
   NotApplicable,
 } from '../types.js';
 import { evaluators } from './evaluators.js';
-import { expandLevels } from './level-bounds.js';
+import { expandedLevelsOf, expandLevels } from './level-bounds.js';
 import { judge } from './verdict.js';
 
 export interface ConditionEvaluation {
@@ -60,19 +60,19 @@ export function evaluateCondition(input: {
     if (!selects(criterion, aircraftClass, category, condition.phase)) continue;
     const altitude = altitudeApplies(criterion, condition);
     if (altitude === 'outside') continue;
-    const base = baseFinding(criterion);
     if (altitude === 'unknown') {
-      findings.push({ ...base, reason: `the criterion applies by altitude and condition '${condition.id}' gives no altitude` });
+      findings.push(notEvaluatedHere(criterion, `the criterion applies by altitude and condition '${condition.id}' gives no altitude`));
       continue;
     }
-    const modes = analysis.modes.filter((m) => m.kind === criterion.mode);
+    const modes: Mode[] = [];
+    for (const m of analysis.modes) if (m.kind === criterion.mode) modes.push(m);
     const absentMeans = criterion.params['notApplicableIfModeAbsent'];
     if (modes.length === 0 && typeof absentMeans === 'string') {
       notApplicable.push({ criterion: criterion.id, set: criterion.set, title: criterion.title, source: criterion.source, reason: absentMeans });
       continue;
     }
     if (modes.length === 0) {
-      findings.push({ ...base, reason: absentModeReason(criterion, analysis) });
+      findings.push(notEvaluatedHere(criterion, absentModeReason(criterion, analysis)));
       continue;
     }
     if (modes.length > 1) {
@@ -130,24 +130,48 @@ function absentModeReason(c: ResolvedCriterion, analysis: ModalAnalysis): string
   return `no ${c.mode} mode identified in this condition`;
 }
 
-/** A finding with nothing evaluated yet: not_evaluated until a value says otherwise. */
-function baseFinding(c: ResolvedCriterion): Finding {
-  return {
+/** A finding with nothing evaluated: no value, so not_evaluated, with the reason. */
+function notEvaluatedHere(c: ResolvedCriterion, reason: string): Finding {
+  return notEvaluated(c, expandedLevelsOf(c.levels), reason, undefined);
+}
+
+/*
+ * Findings are written out as literals, in the order of the `Finding` fields, with `method`
+ * last when there is one: a sweep makes hundreds of thousands of them, and a spread of a base
+ * object per finding made the evaluation allocation-bound.
+ */
+function notEvaluated(c: ResolvedCriterion, bounds: Finding['bounds'], reason: string, method: string | undefined): Finding {
+  return judged(c, bounds, null, null, 'not_evaluated', null, reason, method);
+}
+
+function judged(
+  c: ResolvedCriterion,
+  bounds: Finding['bounds'],
+  value: number | null,
+  level: Level | null,
+  verdict: Finding['verdict'],
+  margin: number | null,
+  reason: string,
+  method: string | undefined,
+): Finding {
+  const finding: Finding = {
     criterion: c.id,
     set: c.set,
     title: c.title,
     mode: c.mode,
     quantity: c.quantity,
-    value: null,
+    value,
     unit: evaluators[c.quantity].unit,
-    level: null,
-    verdict: 'not_evaluated',
-    margin: null,
-    bounds: expandLevels(c.levels),
+    level,
+    verdict,
+    margin,
+    bounds,
     source: c.source,
     confidence: c.confidence,
-    reason: '',
+    reason,
   };
+  if (method !== undefined) finding.method = method;
+  return finding;
 }
 
 function evaluateOne(args: {
@@ -162,22 +186,20 @@ function evaluateOne(args: {
   const { criterion, mode, requiredLevel, set } = args;
   const row = evaluators[criterion.quantity];
   const result = row.evaluate(mode, args);
-  const bounds = expandLevels(result.adjustedBounds ?? criterion.levels);
+  const levels = result.adjustedBounds ?? criterion.levels;
+  const bounds = levels === criterion.levels ? expandedLevelsOf(levels) : expandLevels(levels);
   const ambiguity = mode.ambiguous ? ' (mode identification not clear-cut)' : '';
-  const finding: Finding = {
-    ...baseFinding(criterion),
-    bounds,
-    ...(result.method !== undefined ? { method: result.method } : {}),
-  };
+  const method = result.method;
   const divergentDamping = row.damping && result.divergent === true;
   const allowedFrom = criterion.params['divergenceAllowedFromLevel'];
   const bestReachable: Level | null = divergentDamping ? (allowedFrom === 2 || allowedFrom === 3 ? allowedFrom : null) : 1;
 
   if (result.value === null) {
     if (divergentDamping && bestReachable === null) {
-      return { ...finding, verdict: 'fail', reason: `${result.reason ?? 'divergent mode'}: a divergent mode fails the damping criterion${ambiguity}` };
+      const reason = `${result.reason ?? 'divergent mode'}: a divergent mode fails the damping criterion${ambiguity}`;
+      return judged(criterion, bounds, null, null, 'fail', null, reason, method);
     }
-    return { ...finding, reason: `${result.reason ?? 'no value'}${ambiguity}` };
+    return notEvaluated(criterion, bounds, `${result.reason ?? 'no value'}${ambiguity}`, method);
   }
   const judgement = judge({
     value: result.value,
@@ -188,14 +210,11 @@ function evaluateOne(args: {
     strict: criterion.params['strictBounds'] === true,
     bestReachable,
   });
-  const divergence = divergentDamping ? '; divergent mode (a root with Re > 0)' : '';
-  const infinite = Number.isFinite(result.value) ? '' : '; the value is unbounded';
-  return {
-    ...finding,
-    value: Number.isFinite(result.value) ? result.value : null,
-    level: judgement.level,
-    verdict: judgement.verdict,
-    margin: judgement.margin,
-    reason: `${judgement.reason}${divergence}${infinite}${ambiguity}`,
-  };
+  const finite = Number.isFinite(result.value);
+  let reason = judgement.reason;
+  // the usual finding adds nothing to the shared sentence of its verdict
+  if (divergentDamping) reason += '; divergent mode (a root with Re > 0)';
+  if (!finite) reason += '; the value is unbounded';
+  if (ambiguity !== '') reason += ambiguity;
+  return judged(criterion, bounds, finite ? result.value : null, judgement.level, judgement.verdict, judgement.margin, reason, method);
 }

@@ -9,7 +9,7 @@ export const LEVELS: readonly Level[] = [1, 2, 3];
 
 export type LevelKey = '1' | '2' | '3';
 
-export const levelKey = (level: Level): LevelKey => String(level) as LevelKey;
+export const levelKey = (level: Level): LevelKey => (level === 1 ? '1' : level === 2 ? '2' : '3');
 
 /** Every level's bounds, none left out. */
 export type ExpandedBounds = Record<LevelKey, Bound>;
@@ -27,6 +27,24 @@ export function expandLevels(levels: LevelBounds): ExpandedBounds {
     const given = levels[key];
     previous = given ?? previous;
     out[key] = { ...previous };
+  }
+  return out;
+}
+
+/**
+ * The expansion of a criterion's own levels, computed once per levels object and frozen: a
+ * sweep makes one finding per criterion and condition, and every one of them may share it.
+ * Bounds changed per condition (e.g. by the |phi/beta| rule) go through `expandLevels`.
+ */
+const expandedOnce = new WeakMap<LevelBounds, Readonly<ExpandedBounds>>();
+
+export function expandedLevelsOf(levels: LevelBounds): Readonly<ExpandedBounds> {
+  let out = expandedOnce.get(levels);
+  if (out === undefined) {
+    const fresh = expandLevels(levels);
+    for (const level of LEVELS) Object.freeze(fresh[levelKey(level)]);
+    out = Object.freeze(fresh);
+    expandedOnce.set(levels, out);
   }
   return out;
 }

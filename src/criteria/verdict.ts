@@ -34,37 +34,82 @@ export interface Judgement {
 }
 
 export function judge(input: VerdictInput): Judgement {
-  const { value, bounds, requiredLevel, bestReachable } = input;
-  const level =
-    bestReachable === null ? null : (LEVELS.find((l) => l >= bestReachable && holds(bounds[levelKey(l)], value, input.strict)) ?? null);
+  const { value, bounds, requiredLevel, bestReachable, strict } = input;
+  let level: Level | null = null;
+  if (bestReachable !== null) {
+    for (const l of LEVELS) {
+      if (l >= bestReachable && holds(bounds[levelKey(l)], value, strict)) {
+        level = l;
+        break;
+      }
+    }
+  }
   const governing = governingBoundary(input);
   const margin = governing && Number.isFinite(governing.margin) ? governing.margin : null;
 
   if (level === null || level > requiredLevel) {
-    const reached = level === null ? 'no level reached' : `Level ${level} reached`;
-    const side = governing ? ` (${governing.side === 'min' ? 'below the minimum' : 'above the maximum'} of Level ${requiredLevel})` : '';
-    return { level, verdict: 'fail', margin, reason: `${reached}, Level ${requiredLevel} required${side}` };
+    return { level, verdict: 'fail', margin, reason: failReason(level, requiredLevel, governing?.side) };
   }
   if (governing && governing.margin < bandAround(governing.boundary, input)) {
-    return {
-      level,
-      verdict: 'marginal',
-      margin,
-      reason: `Level ${level} reached (Level ${requiredLevel} required), within the marginal band of the Level ${requiredLevel} ${governing.side === 'min' ? 'minimum' : 'maximum'}`,
-    };
+    return { level, verdict: 'marginal', margin, reason: marginalReason(level, requiredLevel, governing.side) };
   }
-  return { level, verdict: 'pass', margin, reason: `Level ${level} reached (Level ${requiredLevel} required)` };
+  return { level, verdict: 'pass', margin, reason: passReason(level, requiredLevel) };
 }
 
-/** The boundary of the required level nearest the value: min or max, whichever is closer. */
-function governingBoundary({ value, bounds, requiredLevel }: VerdictInput):
-  | { side: 'min' | 'max'; boundary: number; margin: number }
-  | undefined {
+/*
+ * The reasons are a handful of sentences repeated across every finding of a sweep: each is
+ * built once and shared, instead of a fresh string per finding.
+ */
+const reasons = new Map<number, string>();
+
+const sideCode = { min: 1, max: 2 } as const;
+
+function once(key: number, build: () => string): string {
+  let text = reasons.get(key);
+  if (text === undefined) {
+    text = build();
+    reasons.set(key, text);
+  }
+  return text;
+}
+
+const sideWords = { min: 'below the minimum', max: 'above the maximum' } as const;
+const boundaryWords = { min: 'minimum', max: 'maximum' } as const;
+
+function failReason(level: Level | null, required: Level, side: 'min' | 'max' | undefined): string {
+  return once(100 + (level ?? 0) * 10 + required + (side ? sideCode[side] * 1000 : 0), () => {
+    const reached = level === null ? 'no level reached' : `Level ${level} reached`;
+    const where = side ? ` (${sideWords[side]} of Level ${required})` : '';
+    return `${reached}, Level ${required} required${where}`;
+  });
+}
+
+function marginalReason(level: Level, required: Level, side: 'min' | 'max'): string {
+  return once(
+    200 + level * 10 + required + sideCode[side] * 1000,
+    () => `Level ${level} reached (Level ${required} required), within the marginal band of the Level ${required} ${boundaryWords[side]}`,
+  );
+}
+
+function passReason(level: Level, required: Level): string {
+  return once(300 + level * 10 + required, () => `Level ${level} reached (Level ${required} required)`);
+}
+
+interface Governing {
+  side: 'min' | 'max';
+  boundary: number;
+  margin: number;
+}
+
+/** The boundary of the required level nearest the value: min or max, whichever is closer (min on a tie). */
+function governingBoundary({ value, bounds, requiredLevel }: VerdictInput): Governing | undefined {
   const bound = bounds[levelKey(requiredLevel)];
-  const candidates: { side: 'min' | 'max'; boundary: number; margin: number }[] = [];
-  if (bound.min !== undefined) candidates.push({ side: 'min', boundary: bound.min, margin: value - bound.min });
-  if (bound.max !== undefined) candidates.push({ side: 'max', boundary: bound.max, margin: bound.max - value });
-  return candidates.sort((a, b) => a.margin - b.margin)[0];
+  const low = bound.min === undefined ? undefined : { side: 'min' as const, boundary: bound.min, margin: value - bound.min };
+  if (bound.max === undefined) return low;
+  const high = { side: 'max' as const, boundary: bound.max, margin: bound.max - value };
+  // as a stable sort on the margin would choose: min first unless max is strictly nearer
+  if (low === undefined || high.margin < low.margin) return high;
+  return low;
 }
 
 /** Width of the marginal band at a boundary, in the quantity's unit. */

@@ -52,7 +52,7 @@ export function formatNumber(x: number): string {
 }
 
 export function formatRoot(z: Complex): string {
-  return z.im === 0 ? formatNumber(z.re) : `${formatNumber(z.re)} ± ${formatNumber(Math.abs(z.im))}i`;
+  return z.im === 0 ? formatNumber(z.re) : `${formatNumber(z.re)} +/- ${formatNumber(Math.abs(z.im))}i`;
 }
 
 /** A share in whole per cent: `92 %`. */

@@ -9,7 +9,7 @@ import { textTable } from './text-table.js';
 
 export interface TerminalOptions {
   color: boolean;
-  /** which conditions get their tables: all, only those with a fail or marginal finding, or none */
+  /** which conditions get their tables: all, only those with a finding that is not a pass (or no finding at all), or none */
   detail: 'all' | 'issues' | 'none';
   /** include the findings tables (false for the `modes` command) */
   findings: boolean;
@@ -66,12 +66,12 @@ export function formatResultsText(results: Results, options: TerminalOptions): s
   }
   if (listed.length < shown.length) {
     out.push('');
-    out.push(`... and ${shown.length - listed.length} more condition(s) with a fail or marginal finding: see the report or the results JSON`);
+    out.push(`... and ${shown.length - listed.length} more condition(s) with a finding that is not a pass: see the report or the results JSON`);
   }
   if (shown.length < results.conditions.length) {
     out.push('');
     out.push(
-      `${results.conditions.length - shown.length} of ${results.conditions.length} conditions not listed (detail: ${options.detail}${options.detail === 'issues' ? ': only conditions with a fail or marginal finding' : ''}).`,
+      `${results.conditions.length - shown.length} of ${results.conditions.length} conditions not listed (detail: ${options.detail}${options.detail === 'issues' ? ': only conditions with a fail, marginal or not-evaluated finding' : ''}).`,
     );
   }
   if (options.findings) {
@@ -88,7 +88,7 @@ export function formatResultsText(results: Results, options: TerminalOptions): s
 function showCondition(c: ConditionResult, detail: TerminalOptions['detail']): boolean {
   if (detail === 'all') return true;
   if (detail === 'none') return false;
-  return c.findings.some((f) => f.verdict === 'fail' || f.verdict === 'marginal');
+  return c.findings.length === 0 || c.findings.some((f) => f.verdict !== 'pass');
 }
 
 function conditionHeading(c: ConditionResult): string {

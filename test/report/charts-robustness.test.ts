@@ -42,7 +42,18 @@ describe('charts on arbitrary poles', () => {
           wellFormed(chart.svg!);
         }
       }),
-      { numRuns: 150 },
+      { numRuns: 300, seed: 20261202 },
     );
+  });
+});
+
+describe('charts on degenerate poles', () => {
+  it('draw the s-plane with zero and vanishing roots (heading and position states; a found counterexample)', () => {
+    const zero: Mode = { ...pair('kinematic', 0, 1), eigenvalues: [{ re: 0, im: 0 }], dampingRatio: null, dampedFrequency: null, period: null, kind: 'kinematic' };
+    const tiny: Mode = { ...zero, eigenvalues: [{ re: 1.93e-322, im: 0 }], kind: 'other' };
+    for (const extra of [[zero], [tiny], [zero, tiny]]) {
+      const c = withModes(pair('short_period', -1e-4, 1e-3), pair('dutch_roll', -1e-4, 1e-3), extra, 0.5);
+      wellFormed(sPlaneChart(c).svg!);
+    }
   });
 });

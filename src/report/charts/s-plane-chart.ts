@@ -129,7 +129,8 @@ export function sPlaneChart(condition: ConditionResult): ChartOutput {
   parts.push(panel(MAIN, main, modes, slowModes, `${id}-main`, `${id}-unstable`, 'pole', slowPoles.length > 0 ? 'all poles (slow modes labelled at right)' : 'all poles'));
   let caption = `Poles (\u00d7) with rays of constant damping ratio ${DAMPING_RAYS.join(', ')}; equal scales on both axes; right half-plane hatched (unstable).`;
   if (slowPoles.length > 0) {
-    const r = Math.max(...slowPoles.map((p) => Math.hypot(p.re, p.im))) * 1.25;
+    // Zero roots (heading, position) and vanishing ones would give the panel no extent at all.
+    const r = Math.max(Math.max(...slowPoles.map((p) => Math.hypot(p.re, p.im))) * 1.25, radius * 0.01);
     const sMin = Math.min(0, ...slowPoles.map((p) => p.re));
     const sMax = Math.max(0, ...slowPoles.map((p) => p.re));
     const zoom = equalAspect(ZOOM, [Math.min(sMin * 1.2, -r * 0.5), Math.max(sMax * 1.3, r * 0.25)], r);

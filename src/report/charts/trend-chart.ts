@@ -98,26 +98,30 @@ function padded([lo, hi]: [number, number]): [number, number] {
 
 export function trendChart(spec: TrendChartSpec): TrendChartOutput {
   const id = safeId(`trend-${spec.id}`);
-  const [xlo0, xhi0] = padded(extent(spec.points.map((p) => p.x)));
-  // Room at both ends, so that a mark at the extreme condition is not cut by the frame.
-  const xlo = xlo0 - (xhi0 - xlo0) * 0.04;
-  const xhi = xhi0 + (xhi0 - xlo0) * 0.04;
+  const [xlo, xhi] = padded(extent(spec.points.map((p) => p.x)));
   let [ylo, yhi] = padded(extent(spec.points.map((p) => p.y)));
   const span = yhi - ylo;
   const offChart: string[] = [];
   const lines: { value: number; side: 'min' | 'max' }[] = [];
-  const inReach = (v: number) => v >= ylo - span && v <= yhi + span;
+  // A bound is drawn when it lies within reach of the data: the spread of the data or 60 % of
+  // its magnitude, whichever is larger. Nearer than that it is what the reader must see; a
+  // maximum far above (damping <= 2 over a sweep near 0.5) would only squash the marks.
+  const reach = Math.max(span, 0.6 * Math.max(Math.abs(ylo), Math.abs(yhi)));
+  const inReach = (v: number) => v >= ylo - reach && v <= yhi + reach;
   const bars: { x: number; value: number }[] = [];
   if (!spec.boundary && spec.perPointBounds) {
-    let far = 0;
+    const above = new Set<number>();
+    const below = new Set<number>();
     for (const p of spec.points) {
       for (const v of [p.level1?.min, p.level1?.max]) {
         if (v === undefined) continue;
         if (inReach(v)) bars.push({ x: p.x, value: v });
-        else far += 1;
+        else (v > yhi ? above : below).add(v);
       }
     }
-    if (far > 0) offChart.push(`${far} Level 1 bound${far === 1 ? '' : 's'} of single conditions lie far outside the plotted range and are not drawn`);
+    const list = (values: Set<number>) => [...values].sort((a, b) => a - b).map((v) => plain(v)).join(', ');
+    if (above.size > 0) offChart.push(`Level 1 bound${above.size === 1 ? '' : 's'} ${list(above)} lie${above.size === 1 ? 's' : ''} above the plotted range`);
+    if (below.size > 0) offChart.push(`Level 1 bound${below.size === 1 ? '' : 's'} ${list(below)} lie${below.size === 1 ? 's' : ''} below the plotted range`);
     for (const b of bars) {
       ylo = Math.min(ylo, b.value);
       yhi = Math.max(yhi, b.value);
@@ -136,6 +140,10 @@ export function trendChart(spec: TrendChartSpec): TrendChartOutput {
     yhi = Math.max(yhi, v);
   }
   const x = scaleLinear().domain([xlo, xhi]).nice(6).range([BOX.left, BOX.left + BOX.width]);
+  // Room at both ends after rounding, so that a mark at an extreme condition is not cut by the
+  // frame and the axis does not run on to a round number far beyond the sweep.
+  const [nxlo, nxhi] = x.domain() as [number, number];
+  x.domain([nxlo - (nxhi - nxlo) * 0.03, nxhi + (nxhi - nxlo) * 0.03]);
   const y = scaleLinear().domain([ylo - (yhi - ylo) * 0.04, yhi + (yhi - ylo) * 0.04]).nice(5).range([BOX.top + BOX.height, BOX.top]);
 
   const parts: string[] = [svgOpen(WIDTH, HEIGHT, spec.label, 'chart-trend')];
@@ -163,17 +171,18 @@ export function trendChart(spec: TrendChartSpec): TrendChartOutput {
     parts.push(`<path class="level1-bars" d="${d.join('')}" fill="none" stroke="#111" stroke-width="1.1"/>`);
   }
 
+  const dense = spec.points.length > 400;
   const byKind = new Map<MarkKind, Set<string>>();
   for (const p of spec.points) {
     const kind: MarkKind = p.verdict ?? 'none';
-    // Half a unit of the viewBox is below what print or screen can separate.
-    const key = `${Math.round(x(p.x) * 2) / 2},${Math.round(y(p.y) * 2) / 2}`;
+    // Below what print or screen can separate: half a unit of the viewBox, a whole one among dense dots.
+    const q = dense ? 1 : 2;
+    const key = `${Math.round(x(p.x) * q) / q},${Math.round(y(p.y) * q) / q}`;
     let set = byKind.get(kind);
     if (!set) byKind.set(kind, (set = new Set()));
     set.add(key);
   }
   let marks = 0;
-  const dense = spec.points.length > 400;
   for (const kind of MARK_ORDER) {
     const set = byKind.get(kind);
     if (!set || set.size === 0) continue;

@@ -1,0 +1,110 @@
+/**
+ * A large sweep split over worker threads: each worker gets one contiguous share of the
+ * conditions, checks it with the same function as the main thread (check-conditions.ts) and
+ * sends back, batch by batch, the JSON lines of the condition results (see messages.ts). The shares are put
+ * back together in the order of the model file, so the results are those of the serial path.
+ */
+import { Worker } from 'node:worker_threads';
+import { InternalError, type InputIssue } from '../errors.js';
+import { rememberConditionsJson } from '../report/json.js';
+import type { AircraftClass, ConditionResult, FlightCondition, ResolvedCriteriaSet } from '../types.js';
+import type { ConditionsChecked } from './check-conditions.js';
+import type { ShareMessage, WorkerMessage } from './messages.js';
+
+export interface PoolOptions {
+  /** number of worker threads (1 or more) */
+  workers: number;
+  /** conditions per message back; smaller batches keep each worker's memory low */
+  batch?: number;
+  /** called as batches arrive, with the conditions done over all workers */
+  onProgress?: (done: number, total: number) => void;
+}
+
+const DEFAULT_BATCH = 250;
+
+export async function checkConditionsInWorkers(
+  conditions: readonly FlightCondition[],
+  aircraftClass: AircraftClass,
+  sets: readonly ResolvedCriteriaSet[],
+  options: PoolOptions,
+): Promise<ConditionsChecked> {
+  const count = Math.max(1, Math.min(options.workers, conditions.length));
+  const batch = options.batch ?? DEFAULT_BATCH;
+  const total = conditions.length;
+  let done = 0;
+  const shares = splitShares(conditions.length, count).map(([from, to]) =>
+    runShare({ conditions: conditions.slice(from, to), aircraftClass, sets: [...sets], batch }, (n) => {
+      done += n;
+      options.onProgress?.(done, total);
+    }),
+  );
+  const parts = await Promise.all(shares);
+  const results: ConditionResult[] = [];
+  const issues: InputIssue[] = [];
+  for (const part of parts) {
+    for (const r of part.results) results.push(r);
+    for (const i of part.issues) issues.push(i);
+  }
+  return { results, issues };
+}
+
+/** [from, to) ranges of `count` nearly equal contiguous shares of `n` items */
+export function splitShares(n: number, count: number): [number, number][] {
+  const out: [number, number][] = [];
+  for (let k = 0; k < count; k += 1) out.push([Math.floor((n * k) / count), Math.floor((n * (k + 1)) / count)]);
+  return out;
+}
+
+function runShare(share: ShareMessage, progress: (n: number) => void): Promise<ConditionsChecked> {
+  return new Promise((resolve, reject) => {
+    const worker = new Worker(workerScript());
+    const results: ConditionResult[] = [];
+    const issues: InputIssue[] = [];
+    let settled = false;
+    const finish = (error?: Error) => {
+      if (settled) return;
+      settled = true;
+      void worker.terminate();
+      if (error) reject(error);
+      else resolve({ results, issues });
+    };
+    worker.on('message', (message: WorkerMessage) => {
+      if (message.type === 'batch') {
+        const batch = JSON.parse(message.text) as ConditionResult[];
+        for (const [index, result] of message.exact) batch[index] = result;
+        rememberConditionsJson(batch, message.text.slice(1, -1));
+        for (const result of batch) results.push(result);
+        for (const issue of message.issues) issues.push(issue);
+        progress(batch.length);
+      } else if (message.type === 'done') {
+        finish();
+      } else {
+        finish(rebuildError(message.name, message.message, message.stack));
+      }
+    });
+    worker.on('error', (err) => finish(err));
+    worker.on('exit', (code) => finish(new InternalError(`a condition worker stopped early (exit code ${code})`)));
+    worker.postMessage(share);
+  });
+}
+
+/** The worker's error as the serial path would have thrown it. */
+function rebuildError(name: string, message: string, stack: string | undefined): Error {
+  const prefix = 'internal error (a bug in modalgate, please report it): ';
+  const error =
+    name === 'InternalError' && message.startsWith(prefix)
+      ? new InternalError(message.slice(prefix.length))
+      : Object.assign(new Error(message), { name });
+  if (stack !== undefined) error.stack = stack;
+  return error;
+}
+
+/**
+ * The compiled worker beside this module; when this module runs from its TypeScript source
+ * (the test runner), the compiled one in dist/, as Node cannot start a worker from .ts.
+ */
+function workerScript(): URL {
+  const here = import.meta.url;
+  if (here.endsWith('.ts')) return new URL('../../dist/sweep/condition-worker.js', here);
+  return new URL('./condition-worker.js', here);
+}
