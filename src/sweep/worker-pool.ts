@@ -1,6 +1,6 @@
 /**
- * A large sweep split over worker threads: each worker gets one contiguous share of the
- * conditions, checks it with the same function as the main thread (check-conditions.ts) and
+ * A large sweep split over the main thread and worker threads: each gets one contiguous share
+ * of the conditions; each worker checks it with the same function as the main thread (check-conditions.ts) and
  * sends back, batch by batch, the JSON lines of the condition results (see messages.ts). The shares are put
  * back together in the order of the model file, so the results are those of the serial path.
  */
@@ -8,7 +8,7 @@ import { Worker } from 'node:worker_threads';
 import { InternalError, type InputIssue } from '../errors.js';
 import { rememberConditionsJson } from '../report/json.js';
 import type { AircraftClass, ConditionResult, FlightCondition, ResolvedCriteriaSet } from '../types.js';
-import type { ConditionsChecked } from './check-conditions.js';
+import { checkConditions, type ConditionsChecked } from './check-conditions.js';
 import type { ShareMessage, WorkerMessage } from './messages.js';
 
 export interface PoolOptions {
@@ -28,17 +28,25 @@ export async function checkConditionsInWorkers(
   sets: readonly ResolvedCriteriaSet[],
   options: PoolOptions,
 ): Promise<ConditionsChecked> {
-  const count = Math.max(1, Math.min(options.workers, conditions.length));
-  const batch = options.batch ?? DEFAULT_BATCH;
   const total = conditions.length;
+  const workers = Math.max(1, Math.min(options.workers, total));
+  const batch = options.batch ?? DEFAULT_BATCH;
   let done = 0;
-  const shares = splitShares(conditions.length, count).map(([from, to]) =>
-    runShare({ conditions: conditions.slice(from, to), aircraftClass, sets: [...sets], batch }, (n) => {
-      done += n;
-      options.onProgress?.(done, total);
-    }),
+  const progress = (n: number) => {
+    done += n;
+    options.onProgress?.(done, total);
+  };
+  // The main thread takes the first share itself, while the workers start up.
+  const [own, ...rest] = splitShares(total, workers + 1);
+  const shares = rest.map(([from, to]) =>
+    runShare({ conditions: conditions.slice(from, to), aircraftClass, sets: [...sets], batch }, progress),
   );
-  const parts = await Promise.all(shares);
+  // a failed share must not go unhandled while the main thread works on its own
+  for (const share of shares) share.catch(() => undefined);
+  const mine = checkConditions(conditions.slice(own![0], own![1]), aircraftClass, sets, (n) => {
+    if (n % batch === 0 || n === own![1] - own![0]) progress(n % batch === 0 ? batch : n % batch);
+  });
+  const parts = [mine, ...(await Promise.all(shares))];
   const results: ConditionResult[] = [];
   const issues: InputIssue[] = [];
   for (const part of parts) {
