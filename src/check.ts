@@ -36,6 +36,7 @@ export async function runCheck(request: CheckRequest): Promise<CheckOutcome> {
   const loaded = await Promise.all(request.criteria.map((ref) => loadCriteriaSet(ref)));
   const sets = loaded.map((l) => l.set);
 
+  // per condition: analyse the modes, evaluate every set, assemble (worker threads for a big sweep)
   const { results: conditions, issues } = await checkAllConditions(model, sets, {
     ...(request.workers !== undefined ? { workers: request.workers } : {}),
     ...(request.onProgress ? { onProgress: request.onProgress } : {}),

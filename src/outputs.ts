@@ -5,12 +5,8 @@
 import { createHash } from 'node:crypto';
 import type { CheckOutcome } from './check.js';
 import type { Comparison } from './compare/compare-results.js';
-import { findBrowser } from './report/browser.js';
-import { renderHtml } from './report/html.js';
 import { resultsJsonChunks } from './report/json.js';
 import { renderJunit } from './report/junit.js';
-import { renderPdf } from './report/pdf.js';
-import { buildReportView } from './report/view-model.js';
 import { writeFileAtomic, type Chunks } from './report/write-atomic.js';
 
 export interface OutputRequest {
@@ -45,6 +41,8 @@ export async function renderOutputs(outcome: CheckOutcome, request: OutputReques
   if (request.json) artifacts.push({ kind: 'json', path: request.json, data: resultsJsonChunks(results) });
   if (request.junit) artifacts.push({ kind: 'junit', path: request.junit, data: renderJunit(results, { failOn: request.failOn }) });
   if (request.html || request.pdf) {
+    // The document's machinery (templates, Markdown, charts, browser) loads only when asked for.
+    const [{ buildReportView }, { renderHtml }] = await Promise.all([import('./report/view-model.js'), import('./report/html.js')]);
     const reportId = reportIdOf(outcome);
     const view = buildReportView(results, sets, {
       reportId,
@@ -54,6 +52,7 @@ export async function renderOutputs(outcome: CheckOutcome, request: OutputReques
     const html = renderHtml(view);
     if (request.html) artifacts.push({ kind: 'html', path: request.html, data: html });
     if (request.pdf) {
+      const [{ findBrowser }, { renderPdf }] = await Promise.all([import('./report/browser.js'), import('./report/pdf.js')]);
       const browser = findBrowser(request.browser);
       const pdf = await renderPdf(html, {
         browser,

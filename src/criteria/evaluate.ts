@@ -11,10 +11,12 @@ import type {
   Level,
   ModalAnalysis,
   Mode,
+  ModeKind,
   ResolvedCriteriaSet,
   ResolvedCriterion,
   NotApplicable,
 } from '../types.js';
+import { flat } from '../flat-string.js';
 import { evaluators } from './evaluators.js';
 import { expandedLevelsOf, expandLevels } from './level-bounds.js';
 import { judge } from './verdict.js';
@@ -56,8 +58,7 @@ export function evaluateCondition(input: {
   const findings: Finding[] = [];
   const notApplicable: NotApplicable[] = [];
 
-  for (const criterion of set.criteria) {
-    if (!selects(criterion, aircraftClass, category, condition.phase)) continue;
+  for (const criterion of selection(set, aircraftClass, category, condition.phase).criteria) {
     const altitude = altitudeApplies(criterion, condition);
     if (altitude === 'outside') continue;
     if (altitude === 'unknown') {
@@ -81,7 +82,7 @@ export function evaluateCondition(input: {
     for (const mode of modes) findings.push(evaluateOne({ criterion, mode, condition, analysis, aircraftClass, requiredLevel, set }));
   }
   warnings.push(...uncoveredModes(set, analysis, aircraftClass, category, condition.phase));
-  return { category, requiredLevel, requiredLevelFrom, findings, notApplicable, warnings };
+  return { category, requiredLevel, requiredLevelFrom, findings, notApplicable, warnings: warnings.map(flat) };
 }
 
 /**
@@ -95,11 +96,45 @@ function uncoveredModes(
   category: Category,
   phase: string,
 ): string[] {
-  const covered = new Set(set.criteria.filter((c) => selects(c, aircraftClass, category, phase)).map((c) => c.mode));
-  const kinds = [...new Set(analysis.modes.map((m) => m.kind))].filter((k) => k !== 'kinematic' && k !== 'other');
-  return kinds
-    .filter((k) => !covered.has(k))
-    .map((k) => `no criterion of set '${set.id}' applies to the ${k} mode in Category ${category} (phase ${phase}): it is not checked`);
+  const { covered } = selection(set, aircraftClass, category, phase);
+  const out: string[] = [];
+  const seen: ModeKind[] = [];
+  for (const { kind } of analysis.modes) {
+    if (kind === 'kinematic' || kind === 'other' || covered.has(kind) || seen.includes(kind)) continue;
+    seen.push(kind);
+    out.push(`no criterion of set '${set.id}' applies to the ${kind} mode in Category ${category} (phase ${phase}): it is not checked`);
+  }
+  return out;
+}
+
+interface Selection {
+  /** the criteria of the set that apply, in the set's order */
+  criteria: readonly ResolvedCriterion[];
+  /** the mode kinds they look at */
+  covered: ReadonlySet<ModeKind>;
+}
+
+/**
+ * The criteria that apply to a class, category and phase, worked out once per set: a sweep
+ * has thousands of conditions and a handful of such selections. A resolved set is never
+ * changed after it is resolved, which is what keeps the cached selection valid.
+ */
+const selections = new WeakMap<ResolvedCriteriaSet, Map<string, Selection>>();
+
+function selection(set: ResolvedCriteriaSet, aircraftClass: AircraftClass, category: Category, phase: string): Selection {
+  let bySelection = selections.get(set);
+  if (bySelection === undefined) {
+    bySelection = new Map();
+    selections.set(set, bySelection);
+  }
+  const key = `${aircraftClass}\n${category}\n${phase}`;
+  let found = bySelection.get(key);
+  if (found === undefined) {
+    const criteria = set.criteria.filter((c) => selects(c, aircraftClass, category, phase));
+    found = { criteria, covered: new Set(criteria.map((c) => c.mode)) };
+    bySelection.set(key, found);
+  }
+  return found;
 }
 
 function selects(c: ResolvedCriterion, aircraftClass: AircraftClass, category: Category, phase: string): boolean {
@@ -168,9 +203,9 @@ function judged(
     bounds,
     source: c.source,
     confidence: c.confidence,
-    reason,
+    reason: flat(reason),
   };
-  if (method !== undefined) finding.method = method;
+  if (method !== undefined) finding.method = flat(method);
   return finding;
 }
 

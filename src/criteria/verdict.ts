@@ -11,6 +11,7 @@
  * where a value is missing.
  */
 import type { Level, Quantity, ResolvedCriteriaSet, Verdict } from '../types.js';
+import { flat } from '../flat-string.js';
 import { holds, LEVELS, levelKey, type ExpandedBounds } from './level-bounds.js';
 
 export interface VerdictInput {
@@ -67,7 +68,7 @@ const sideCode = { min: 1, max: 2 } as const;
 function once(key: number, build: () => string): string {
   let text = reasons.get(key);
   if (text === undefined) {
-    text = build();
+    text = flat(build());
     reasons.set(key, text);
   }
   return text;

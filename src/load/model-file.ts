@@ -90,7 +90,7 @@ export function parseModel(text: string, file: string, tables: Record<string, Ta
       continue;
     }
     if (!settings) continue;
-    conditions.push({ ...built.value, notes: [...built.value.notes, ...entry.notes], place: entry.place });
+    conditions.push(withLazyPlace({ ...built.value, notes: [...built.value.notes, ...entry.notes] }, () => entry.place));
   }
 
   const unique = dedupe(issues);
@@ -233,4 +233,18 @@ function sortByPlace(issues: InputIssue[], modelFile: string): InputIssue[] {
 
 function isRecord(x: unknown): x is Record<string, unknown> {
   return typeof x === 'object' && x !== null && !Array.isArray(x);
+}
+
+/**
+ * A condition's line and column are looked up only when something asks for them (an error
+ * after loading, e.g. an unknown phase): locating costs a pass over the text, and a sweep of
+ * ten thousand good conditions never needs it.
+ */
+function withLazyPlace(condition: Omit<FlightCondition, 'place'>, locate: () => Place): FlightCondition {
+  let place: Place | undefined;
+  return Object.defineProperty(condition, 'place', {
+    enumerable: true,
+    configurable: true,
+    get: () => (place ??= locate()),
+  }) as FlightCondition;
 }

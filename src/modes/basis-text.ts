@@ -3,7 +3,9 @@
  * state groups and states, how fast the mode is among its axis. Numbers have three
  * significant digits and no exponent; the formatter is written out by hand because the
  * sentences are built for every root of every condition of a sweep and the general-purpose
- * formatters dominated the analysis time.
+ * formatters dominated the analysis time. The text is plain ASCII ('+/-', not the plus-minus
+ * sign): one non-ASCII character makes V8 store a whole string, and every JSON line holding
+ * it, with two bytes per character, which doubled the memory of a large sweep's results.
  */
 import type { Complex } from '../types.js';
 import { leastStable, type Root } from './roots.js';

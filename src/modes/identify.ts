@@ -23,6 +23,7 @@ import {
   pct,
   rootSummary,
 } from './basis-text.js';
+import { flat } from '../flat-string.js';
 import { modalFigures } from './modal-figures.js';
 import { modeShape } from './mode-shape.js';
 import { LATERAL_TEMPLATES, LONGITUDINAL_TEMPLATES, type ModeTemplate } from './mode-templates.js';
@@ -104,7 +105,7 @@ export function identifyModes(roots: readonly Root[], context: IdentifyContext):
       KIND_ORDER.indexOf(a.kind) - KIND_ORDER.indexOf(b.kind) ||
       magnitude(b.eigenvalues[0]!) - magnitude(a.eigenvalues[0]!),
   );
-  return { modes, warnings };
+  return { modes, warnings: warnings.map(flat) };
 }
 
 function identifyAxis(
@@ -221,7 +222,7 @@ function buildMode(kind: ModeKind, roots: readonly Root[], basis: string, ambigu
     timeToHalf: figures.timeToHalf,
     timeToDouble: figures.timeToDouble,
     cyclesToHalf: figures.cyclesToHalf,
-    basis,
+    basis: flat(basis),
     ambiguous,
     referenceState,
     shape,

@@ -44,10 +44,15 @@ export function modeShape(root: Root, kind: ModeKind): ModeShape {
       phase: k === reference ? 0 : Math.atan2(ratioIm, ratioRe),
       participation: root.participation[k]!,
     };
-    // insertion keeps the largest participation first (a mode has a handful of states)
+    // insertion keeps the largest participation first (a mode has a handful of states);
+    // shifting by hand, as splice was the costliest step of the shape in a sweep
     let at = shape.length;
-    while (at > 0 && shape[at - 1]!.participation < entry.participation) at -= 1;
-    shape.splice(at, 0, entry);
+    shape.push(entry);
+    while (at > 0 && shape[at - 1]!.participation < entry.participation) {
+      shape[at] = shape[at - 1]!;
+      at -= 1;
+    }
+    shape[at] = entry;
   }
   return { referenceState: root.states[reference]!, shape };
 }

@@ -1,7 +1,7 @@
 /**
- * A large sweep split over the main thread and worker threads: each gets one contiguous share
- * of the conditions; each worker checks it with the same function as the main thread (check-conditions.ts) and
- * sends back, batch by batch, the JSON lines of the condition results (see messages.ts). The shares are put
+ * A large sweep split over the main thread and worker threads: each takes one contiguous share
+ * of the conditions and checks it with the same function (check-conditions.ts); a worker sends
+ * back, batch by batch, the JSON lines of its results (see messages.ts). The shares are put
  * back together in the order of the model file, so the results are those of the serial path.
  */
 import { Worker } from 'node:worker_threads';
@@ -9,7 +9,7 @@ import { InternalError, type InputIssue } from '../errors.js';
 import { rememberConditionsJson } from '../report/json.js';
 import type { AircraftClass, ConditionResult, FlightCondition, ResolvedCriteriaSet } from '../types.js';
 import { checkConditions, type ConditionsChecked } from './check-conditions.js';
-import type { ShareMessage, WorkerMessage } from './messages.js';
+import type { BatchMessage, ShareMessage, WorkerMessage } from './messages.js';
 
 export interface PoolOptions {
   /** number of worker threads (1 or more) */
@@ -41,12 +41,17 @@ export async function checkConditionsInWorkers(
   const shares = rest.map(([from, to]) =>
     runShare({ conditions: conditions.slice(from, to), aircraftClass, sets: [...sets], batch }, progress),
   );
-  // a failed share must not go unhandled while the main thread works on its own
-  for (const share of shares) share.catch(() => undefined);
-  const mine = checkConditions(conditions.slice(own![0], own![1]), aircraftClass, sets, (n) => {
-    if (n % batch === 0 || n === own![1] - own![0]) progress(n % batch === 0 ? batch : n % batch);
-  });
-  const parts = [mine, ...(await Promise.all(shares))];
+  let mine: ConditionsChecked;
+  try {
+    mine = checkConditions(conditions.slice(own![0], own![1]), aircraftClass, sets, () => progress(1));
+  } catch (err) {
+    for (const share of shares) {
+      share.stop();
+      share.done.catch(() => undefined);
+    }
+    throw err;
+  }
+  const parts = [mine, ...(await Promise.all(shares.map((share) => share.done)))];
   const results: ConditionResult[] = [];
   const issues: InputIssue[] = [];
   for (const part of parts) {
@@ -63,9 +68,15 @@ export function splitShares(n: number, count: number): [number, number][] {
   return out;
 }
 
-function runShare(share: ShareMessage, progress: (n: number) => void): Promise<ConditionsChecked> {
-  return new Promise((resolve, reject) => {
-    const worker = new Worker(workerScript());
+interface RunningShare {
+  done: Promise<ConditionsChecked>;
+  /** stop the worker (its share is then rejected) */
+  stop: () => void;
+}
+
+function runShare(share: ShareMessage, progress: (n: number) => void): RunningShare {
+  const worker = new Worker(workerScript());
+  const done = new Promise<ConditionsChecked>((resolve, reject) => {
     const results: ConditionResult[] = [];
     const issues: InputIssue[] = [];
     let settled = false;
@@ -78,9 +89,7 @@ function runShare(share: ShareMessage, progress: (n: number) => void): Promise<C
     };
     worker.on('message', (message: WorkerMessage) => {
       if (message.type === 'batch') {
-        const batch = JSON.parse(message.text) as ConditionResult[];
-        for (const [index, result] of message.exact) batch[index] = result;
-        rememberConditionsJson(batch, message.text.slice(1, -1));
+        const batch = readBatch(message);
         for (const result of batch) results.push(result);
         for (const issue of message.issues) issues.push(issue);
         progress(batch.length);
@@ -94,6 +103,15 @@ function runShare(share: ShareMessage, progress: (n: number) => void): Promise<C
     worker.on('exit', (code) => finish(new InternalError(`a condition worker stopped early (exit code ${code})`)));
     worker.postMessage(share);
   });
+  return { done, stop: () => void worker.terminate() };
+}
+
+/** The results of a batch message, their JSON lines kept for the results file. */
+export function readBatch(message: Pick<BatchMessage, 'text' | 'exact'>): ConditionResult[] {
+  const batch = JSON.parse(message.text) as ConditionResult[];
+  for (const [index, result] of message.exact) batch[index] = result;
+  rememberConditionsJson(batch, message.text.slice(1, -1));
+  return batch;
 }
 
 /** The worker's error as the serial path would have thrown it. */
