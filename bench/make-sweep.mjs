@@ -14,6 +14,7 @@
  */
 import { writeFileSync } from 'node:fs';
 import { pathToFileURL } from 'node:url';
+import { seeded } from './lib/seeded.mjs';
 
 /** [m/s^2] standard gravity */
 const G = 9.80665;
@@ -37,18 +38,6 @@ const PHASES = [
   { code: 'CL', share: 0.25, v: [72, 102], h: [300, 5200], CD0: 0.034, CLa: 5.4, Clb: -0.085 },
   { code: 'PA', share: 0.25, v: [54, 68], h: [0, 900], CD0: 0.065, CLa: 5.7, Clb: -0.1 },
 ];
-
-/** Seeded generator (mulberry32): small, fast, and the same sequence on every platform. */
-function generator(seed) {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 /**
  * Air density [kg/m^3] in the troposphere (h < 11 km) of the US Standard Atmosphere 1976:
@@ -145,7 +134,7 @@ function makeCondition(index, rand) {
 
 /** The whole model file as an object. */
 export function makeSweep({ count = 10000, seed = 20261 } = {}) {
-  const rand = generator(seed);
+  const rand = seeded(seed);
   const conditions = [];
   for (let i = 0; i < count; i++) conditions.push(makeCondition(i, rand));
   return {

@@ -4,21 +4,10 @@
 // StateSpace to the identified modes with their figures and basis text.
 // Build first: npx tsc -p tsconfig.build.json. Target: at most 25 us per condition.
 import { analyseModes } from '../dist/modes/analyse.js';
+import { seeded } from './lib/seeded.mjs';
 
 const CONDITIONS = 10_000;
 const TARGET_US = 25;
-
-/** mulberry32: a small deterministic generator, seeded here so every run times the same work. */
-function generator(seed) {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 // Nominal dimensional derivatives (SI, stability axes) at V = 55 m/s; only their magnitudes matter here.
 const V = 55;
@@ -44,7 +33,7 @@ function condition(random) {
   return { states, A, inputs: [], B: A.map(() => []), outputs: [], C: [], D: [] };
 }
 
-const random = generator(20260101);
+const random = seeded(20260101);
 const systems = Array.from({ length: CONDITIONS }, () => condition(random));
 
 function run() {

@@ -3,7 +3,7 @@
  * analyse modes -> resolve criteria -> evaluate findings -> results. Writers (terminal, JSON,
  * JUnit, HTML, PDF) take the results from here; nothing in this file prints or writes.
  */
-import { InputError, type InputIssue } from './errors.js';
+import { dedupeIssues, InputError } from './errors.js';
 import { loadCriteriaSet } from './load/criteria-file.js';
 import { loadModel } from './load/load-model.js';
 import { assembleResults } from './results.js';
@@ -49,14 +49,4 @@ export async function runCheck(request: CheckRequest): Promise<CheckOutcome> {
   ];
   const results = assembleResults({ request, model, sets, inputs, conditions });
   return { model, sets, results };
-}
-
-function dedupeIssues(issues: InputIssue[]): InputIssue[] {
-  const seen = new Set<string>();
-  return issues.filter((i) => {
-    const key = `${i.file}:${i.line}:${i.column}:${i.field}:${i.message}`;
-    if (seen.has(key)) return false;
-    seen.add(key);
-    return true;
-  });
 }

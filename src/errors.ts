@@ -41,6 +41,17 @@ export class InternalError extends Error {
   }
 }
 
+/** The same problem found twice (e.g. once per criteria set) is reported once. */
+export function dedupeIssues(issues: InputIssue[]): InputIssue[] {
+  const seen = new Set<string>();
+  return issues.filter((i) => {
+    const key = `${i.file}:${i.line}:${i.column}:${i.field}:${i.message}:${i.code}`;
+    if (seen.has(key)) return false;
+    seen.add(key);
+    return true;
+  });
+}
+
 /** `file:line:col: field: message (expected X, found Y) [code]` */
 export function formatIssue(issue: InputIssue): string {
   const place = [issue.file, issue.line, issue.column].filter((p) => p !== undefined).join(':');

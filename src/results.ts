@@ -1,27 +1,16 @@
 /** Assemble the results object (contract 2, `modalgate-results/1`) from the pipeline's parts. */
+import type { ConditionEvaluation } from './criteria/evaluate.js';
 import type {
   AircraftModel,
-  Category,
   ConditionResult,
   Finding,
   FlightCondition,
   InputFile,
-  Level,
   ModalAnalysis,
-  NotApplicable,
   ResolvedCriteriaSet,
   Results,
   VerdictCounts,
 } from './types.js';
-
-export interface ConditionEvaluation {
-  category: Category | null;
-  requiredLevel: Level;
-  requiredLevelFrom: 'model' | 'criteria default';
-  findings: Finding[];
-  notApplicable: NotApplicable[];
-  warnings: string[];
-}
 
 export function assembleCondition(
   condition: FlightCondition,

@@ -3,7 +3,6 @@
  * Follows the `extends` chain, validates every file (all problems at once, with file, line
  * and column), then hands the chain, root first, to the pure resolver.
  */
-import { createHash } from 'node:crypto';
 import { existsSync, readdirSync } from 'node:fs';
 import { readFile } from 'node:fs/promises';
 import path from 'node:path';
@@ -13,6 +12,7 @@ import type { ParsedCriteriaFile } from '../criteria/parsed-criteria-file.js';
 import { resolveCriteriaChain } from '../criteria/resolve.js';
 import type { Place, ResolvedCriteriaSet } from '../types.js';
 import { criteriaFileSchema } from './criteria-schema.js';
+import { sha256Hex } from './read-file.js';
 import { parseStructuredText } from './structured-text.js';
 import { issuesFromZod } from './zod-issues.js';
 
@@ -46,7 +46,7 @@ export async function loadCriteriaSet(ref: string): Promise<LoadedCriteriaSet> {
     // A file with schema problems is still followed up its chain, so that one run reports all.
     let parent: unknown;
     if (checked.success) {
-      chain.unshift({ parsed: { file: shown, data: checked.data, locate: source.locate }, sha256: sha256(text) });
+      chain.unshift({ parsed: { file: shown, data: checked.data, locate: source.locate }, sha256: sha256Hex(text) });
       parent = checked.data.extends;
     } else {
       issues.push(...issuesFromZod(checked.error, source));
@@ -108,10 +108,6 @@ function shippedIds(): string[] {
   } catch {
     return [];
   }
-}
-
-function sha256(text: string): string {
-  return createHash('sha256').update(text).digest('hex');
 }
 
 async function readText(absolute: string, shown: string, referencedAt: Place | undefined): Promise<string> {

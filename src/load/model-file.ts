@@ -6,7 +6,7 @@
  * InputError, sorted by file (model file first) and place.
  */
 import type { z } from 'zod';
-import { formatPath, InputError, type InputIssue } from '../errors.js';
+import { dedupeIssues, formatPath, InputError, type InputIssue } from '../errors.js';
 import { buildCondition, type BuildSettings } from '../model/build-condition.js';
 import type { ModelProblem } from '../model/problem.js';
 import type { AircraftModel, FlightCondition, Place } from '../types.js';
@@ -93,7 +93,7 @@ export function parseModel(text: string, file: string, tables: Record<string, Ta
     conditions.push(withLazyPlace({ ...built.value, notes: [...built.value.notes, ...entry.notes] }, () => entry.place));
   }
 
-  const unique = dedupe(issues);
+  const unique = dedupeIssues(issues);
   if (unique.length > 0 || !top.success) throw new InputError(sortByPlace(unique, file));
   return {
     file,
@@ -213,16 +213,6 @@ function withoutUnreadable(error: z.ZodError, unreadable: (string | number)[][])
   if (unreadable.length === 0) return error;
   const keep = error.issues.filter((issue) => !unreadable.some((u) => u.every((k, i) => issue.path[i] === k)));
   return { issues: keep } as unknown as z.ZodError;
-}
-
-function dedupe(issues: InputIssue[]): InputIssue[] {
-  const seen = new Set<string>();
-  return issues.filter((i) => {
-    const key = `${i.file}:${i.line}:${i.column}:${i.field}:${i.message}:${i.code}`;
-    if (seen.has(key)) return false;
-    seen.add(key);
-    return true;
-  });
 }
 
 /** The model file first, then each table; within a file, by line and column. */

@@ -11,5 +11,10 @@ export async function readInputFile(path: string): Promise<{ path: string; text:
     const reason = (err as NodeJS.ErrnoException).code === 'ENOENT' ? 'file not found' : `cannot be read (${(err as Error).message})`;
     throw new InputError([{ file: path, field: '', message: reason, code: 'unreadable' }]);
   }
-  return { path, text: bytes.toString('utf8'), sha256: createHash('sha256').update(bytes).digest('hex') };
+  return { path, text: bytes.toString('utf8'), sha256: sha256Hex(bytes) };
+}
+
+/** SHA-256 of a file's content, hex, as the results' inputs list it. */
+export function sha256Hex(content: string | Buffer): string {
+  return createHash('sha256').update(content).digest('hex');
 }

@@ -1,14 +1,15 @@
-/** Number formatting shared by the terminal table (the HTML report has its own view model). */
+/** Number formatting of the terminal tables: plain ASCII (the review document has view-format.ts). */
+import { significantParts } from './significant.js';
 
 /** `digits` significant figures, plain notation for ordinary magnitudes, '-' for null. */
 export function formatSig(value: number | null | undefined, digits = 3): string {
   if (value === null || value === undefined) return '-';
   if (!Number.isFinite(value)) return value > 0 ? 'inf' : value < 0 ? '-inf' : 'NaN';
   if (value === 0) return '0';
-  const abs = Math.abs(value);
-  if (abs >= 1e5 || abs < 1e-3) return value.toExponential(digits - 1);
-  const decimals = Math.max(0, digits - 1 - Math.floor(Math.log10(abs)));
-  return value.toFixed(decimals);
+  const parts = significantParts(value, digits);
+  const sign = parts.negative ? '-' : '';
+  if ('fixed' in parts) return `${sign}${parts.fixed}`;
+  return `${sign}${parts.mantissa}e${parts.exponent < 0 ? '' : '+'}${parts.exponent}`;
 }
 
 /** `-2.51 ± 2.59i` for a pair, `-8.43` for a real root. */

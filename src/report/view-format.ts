@@ -3,6 +3,7 @@
  * this is the one place that decides digits, signs and unit spelling for the HTML and PDF.
  */
 import type { Bound, Complex, LevelBounds } from '../types.js';
+import { significantParts } from './significant.js';
 
 const MINUS = '\u2212';
 const SUPERSCRIPT: Record<string, string> = {
@@ -22,21 +23,12 @@ export function sig(value: number | null | undefined, digits = 3): string {
   if (Number.isNaN(value)) return 'NaN';
   if (!Number.isFinite(value)) return value > 0 ? '\u221e' : `${MINUS}\u221e`;
   if (value === 0) return '0';
-  const abs = Math.abs(value);
-  let body: string;
-  if (abs >= 1e5 || abs < 1e-3) {
-    const [mantissa, exponent] = abs.toExponential(digits - 1).split('e') as [string, string];
-    const exp = String(Number(exponent)).split('').map((c) => SUPERSCRIPT[c] ?? c).join('');
-    body = `${mantissa}\u00d710${exp}`;
-  } else {
-    const decimals = Math.max(0, digits - 1 - Math.floor(Math.log10(abs)));
-    body = abs.toFixed(decimals);
-    // toFixed can round up to a new decade (9.996 -> "10.00"): keep the significant count.
-    if (Math.floor(Math.log10(Number(body))) > Math.floor(Math.log10(abs)) && decimals > 0) {
-      body = abs.toFixed(decimals - 1);
-    }
-  }
-  return value < 0 ? `${MINUS}${body}` : body;
+  const parts = significantParts(value, digits);
+  const body =
+    'fixed' in parts
+      ? parts.fixed
+      : `${parts.mantissa}\u00d710${String(parts.exponent).split('').map((c) => SUPERSCRIPT[c] ?? c).join('')}`;
+  return parts.negative ? `${MINUS}${body}` : body;
 }
 
 /**

@@ -20,23 +20,25 @@ import { isJsonSafe } from '../../src/sweep/json-safe.js';
 import { checkConditionsInWorkers, readBatch, splitShares } from '../../src/sweep/worker-pool.js';
 import { workersFor } from '../../src/sweep/check-all.js';
 import type { AircraftModel, ConditionResult, ResolvedCriteriaSet } from '../../src/types.js';
+import { seeded } from '../../bench/lib/seeded.mjs';
 
 const ROOT = fileURLToPath(new URL('../../', import.meta.url));
 
+/** The results file a run of these conditions writes (fixed run data, no inputs). */
+function resultsFile(model: AircraftModel, sets: ResolvedCriteriaSet[], conditions: ConditionResult[]): string {
+  return renderResultsJson(
+    assembleResults({
+      request: { toolVersion: 'test', command: ['modalgate'], generatedAt: '2026-01-01T00:00:00.000Z' },
+      model,
+      sets,
+      inputs: [],
+      conditions,
+    }),
+  );
+}
+
 /** [m/s^2] standard gravity (ISO 80000-3, exact by definition) */
 const G = 9.80665;
-
-/** Seeded generator (mulberry32, common practice): the same model on every run. */
-function seeded(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 /**
  * One condition of the invented Grebe: the usual decoupled stability-axis layout (states
@@ -151,17 +153,7 @@ describe('worker path of a large sweep', () => {
     expect(findings.some((f) => f.verdict === 'fail')).toBe(true);
     expect(serial.results.some((r) => r.warnings.length > 0)).toBe(true);
 
-    const file = (conditions: ConditionResult[]) =>
-      renderResultsJson(
-        assembleResults({
-          request: { toolVersion: 'test', command: ['modalgate'], generatedAt: '2026-01-01T00:00:00.000Z' },
-          model,
-          sets,
-          inputs: [],
-          conditions,
-        }),
-      );
-    expect(file(parallel.results)).toBe(file(serial.results));
+    expect(resultsFile(model, sets, parallel.results)).toBe(resultsFile(model, sets, serial.results));
   });
 
   it('reports an input problem of a worker share as the serial path does', async () => {
@@ -187,17 +179,7 @@ describe('reading a batch back from a worker', () => {
     const back = readBatch({ text, exact: [[1, structuredClone(odd)]] });
     expect(back).toStrictEqual(sent);
     expect(Object.is(back[1]!.modes[0]!.shape[0]!.phase, -0)).toBe(true);
-    const file = (conditions: ConditionResult[]) =>
-      renderResultsJson(
-        assembleResults({
-          request: { toolVersion: 'test', command: ['modalgate'], generatedAt: '2026-01-01T00:00:00.000Z' },
-          model,
-          sets,
-          inputs: [],
-          conditions,
-        }),
-      );
-    expect(file(back)).toBe(file(sent));
+    expect(resultsFile(model, sets, back)).toBe(resultsFile(model, sets, sent));
   });
 });
 

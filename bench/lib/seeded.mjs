@@ -1,0 +1,15 @@
+/**
+ * Seeded generator (mulberry32, common practice): small, fast, and the same sequence on every
+ * platform, so benchmarks and generated test models are the same on every run. For generated
+ * inputs only; nothing in src/ draws random numbers.
+ */
+export function seeded(seed) {
+  let a = seed >>> 0;
+  return () => {
+    a = (a + 0x6d2b79f5) >>> 0;
+    let t = a;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
