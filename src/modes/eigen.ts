@@ -2,8 +2,8 @@
  * Eigenvalues with right and left eigenvectors of a real state matrix.
  *
  * The matrix is balanced first (balance.ts) so mixed state units cost no accuracy.
- * The real Schur route of ml-matrix (`EigenvalueDecomposition`, Hessenberg reduction and
- * shifted QR) returns real eigenvectors V: for a complex pair in columns j, j+1 (imaginary
+ * The real Schur route (real-eigen.ts: Hessenberg reduction and shifted QR) returns real
+ * eigenvectors V: for a complex pair in columns j, j+1 (imaginary
  * part of eigenvalue j positive) the eigenvector of lambda_j is V[:,j] + i V[:,j+1] and that of
  * its conjugate V[:,j] - i V[:,j+1]. Writing the complex eigenvector matrix as Vc = V P with
  * P = [[1, 1], [i, -i]] on each pair gives the left eigenvectors Wc = Vc^-1 = P^-1 V^-1 with
@@ -11,10 +11,10 @@
  * Matrix Computations, 4th ed., ch. 7; the row-j relation Wc A = Lambda Wc defines the
  * left eigenvectors, normalised so that w_j v_j = 1).
  */
-import { EigenvalueDecomposition, Matrix } from 'ml-matrix';
 import type { Complex } from '../types.js';
 import { InternalError } from '../errors.js';
 import { balanceInto } from './balance.js';
+import { realEigen } from './real-eigen.js';
 import { invertInPlace, oneNorm } from './real-inverse.js';
 
 export interface ComplexVector {
@@ -69,40 +69,13 @@ function buffers(n: number): typeof work {
   return work;
 }
 
-/**
- * Input matrices for ml-matrix by size, reused: its constructor from a 2D array checks and
- * copies row by row, which cost more than the eigen-analysis of a 4 x 4 block.
- * The decomposition copies its input, so reuse is safe.
- */
-const inputMatrices = new Map<number, Matrix>();
-
-function inputMatrix(n: number, values: Float64Array): Matrix {
-  let m = inputMatrices.get(n);
-  if (m === undefined) {
-    m = new Matrix(n, n);
-    inputMatrices.set(n, m);
-  }
-  for (let i = 0; i < n; i += 1) for (let j = 0; j < n; j += 1) m.set(i, j, values[i * n + j]!);
-  return m;
-}
-
-/** The eigenvalues as ml-matrix 6 keeps them (d, e); its public getters copy them on each call. */
-interface EvdInternals {
-  d?: ArrayLike<number>;
-  e?: ArrayLike<number>;
-}
-
 export function eigenDecompose(A: readonly (readonly number[])[]): Eigensystem {
   const n = A.length;
   if (n === 1) return scalarSystem(A[0]![0]!);
 
   const { balanced, scale, v, scaled, inverse, row: rowScale, col: colScale } = buffers(n);
   balanceInto(A, balanced, scale);
-  const evd = new EigenvalueDecomposition(inputMatrix(n, balanced));
-  const internals = evd as unknown as EvdInternals;
-  const re = internals.d ?? evd.realEigenvalues;
-  const im = internals.e ?? evd.imaginaryEigenvalues;
-  const V = evd.eigenvectorMatrix;
+  const { d: re, e: im, V } = realEigen(balanced, n);
 
   // Equilibrate V (rows by state, then columns by mode) so the singularity test and the
   // conditioning do not depend on state units or on the arbitrary eigenvector scaling.
@@ -110,7 +83,7 @@ export function eigenDecompose(A: readonly (readonly number[])[]): Eigensystem {
   for (let i = 0; i < n; i += 1) {
     let big = 0;
     for (let j = 0; j < n; j += 1) {
-      const x = scale[i]! * V.get(i, j); // back to the states of A: v_A = D v_B
+      const x = scale[i]! * V[i * n + j]!; // back to the states of A: v_A = D v_B
       v[i * n + j] = x;
       if (Math.abs(x) > big) big = Math.abs(x);
     }
