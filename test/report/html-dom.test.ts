@@ -8,6 +8,7 @@ import { join } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import puppeteer, { type Browser, type Page } from 'puppeteer-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { runCheck } from '../../src/check.js';
 import { renderHtml } from '../../src/report/html.js';
 import { buildReportView } from '../../src/report/view-model.js';
 import { larkspurReview } from '../fixtures/results/larkspur-review.js';
@@ -162,5 +163,22 @@ describe('HTML report in Chromium', () => {
     expect(text).toContain('<script>alert(2)</script>');
     expect(outside).toEqual([]);
     await page.close();
+  });
+
+  it('keeps every table of the shipped samples within the page column on screen', async () => {
+    // A wide verdict matrix (22 criteria for the Class I sample) once ran past the column.
+    for (const sample of ['samples/ketra-kt4.yaml', 'samples/ketra-kt4-envelope.yaml']) {
+      const { results: r, sets: s } = await runCheck({ model: sample, criteria: ['mil-f-8785c'], toolVersion: 'test', command: [], generatedAt: '2026-12-02T00:00:00Z' });
+      const { page } = await open(renderHtml(buildReportView(r, s, { reportId: 'MG-WIDTH', detail: 'all' })), 'width.html');
+      await page.setViewport({ width: 1280, height: 900 });
+      const overflow = await page.evaluate(() => {
+        const column = document.querySelector('.document')!.getBoundingClientRect();
+        return [...document.querySelectorAll('table')]
+          .map((t) => ({ cls: t.className, right: t.getBoundingClientRect().right }))
+          .filter((t) => t.right > column.right + 0.5);
+      });
+      expect(overflow, sample).toEqual([]);
+      await page.close();
+    }
   });
 });
