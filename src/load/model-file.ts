@@ -29,6 +29,12 @@ interface Entry {
   /** path prefix of its problems (from the model file root for a written condition, empty for a row) */
   path: (string | number)[];
   place: Place;
+  /**
+   * The place again, found only when asked, by a function that holds neither the parsed text
+   * nor this entry: a built condition keeps it for the whole run, and keeping the parsed tree
+   * of a large sweep alive beside the built conditions made every garbage collection longer.
+   */
+  placeLater: () => Place;
   /** fields already reported as unreadable: no second issue for them */
   unreadable: (string | number)[][];
   notes: string[];
@@ -90,7 +96,7 @@ export function parseModel(text: string, file: string, tables: Record<string, Ta
       continue;
     }
     if (!settings) continue;
-    conditions.push(withLazyPlace({ ...built.value, notes: [...built.value.notes, ...entry.notes] }, () => entry.place));
+    conditions.push(withLazyPlace({ ...built.value, notes: [...built.value.notes, ...entry.notes] }, entry.placeLater));
   }
 
   const unique = dedupeIssues(issues);
@@ -107,14 +113,17 @@ const CHECK_ONLY: BuildSettings = { units: 'SI', gravity: STANDARD_GRAVITY, grav
 
 function writtenEntries(root: Record<string, unknown>, source: StructuredText): Entry[] {
   const raw = Array.isArray(root['conditions']) ? (root['conditions'] as unknown[]) : [];
+  const { file, locate } = source;
   return raw.map((condition, i) => {
     const path = ['conditions', i];
+    const placeLater = (): Place => ({ file, ...(locate(path) ?? {}) });
     return {
       raw: condition,
       path,
       get place() {
-        return { file: source.file, ...(source.locate(path) ?? {}) };
+        return placeLater();
       },
+      placeLater,
       unreadable: [],
       notes: [],
       issuesOf: (error) => issuesFromZod(prefixed(error, path), source),
@@ -138,28 +147,32 @@ function tableEntries(table: WrittenConditionTable, tables: Record<string, Table
     const pos = (atKey ? source.locateKey?.(place.path) : undefined) ?? source.locate(place.path);
     return { file: source.file, ...(pos ?? {}), field: place.field, ...rest };
   };
-  const entries = read.rows.map((row): Entry => ({
-    raw: row.value,
-    path: [],
-    place: { file: text.path, line: row.line },
-    unreadable: row.unreadable,
-    notes: row.notes,
-    issuesOf: (error) =>
-      error.issues.map((zodIssue) => {
-        // An unknown field is placed by its own key, which only common can hold.
-        const unknownKey = zodIssue.code === 'unrecognized_keys' ? (zodIssue as { keys: string[] }).keys[0] : undefined;
-        const path = [...(zodIssue.path as (string | number)[]), ...(unknownKey !== undefined ? [unknownKey] : [])];
-        const one = { issues: [zodIssue] } as unknown as z.ZodError;
-        // issuesFromZod words the issue; the place and field are the row's.
-        const [worded] = issuesFromZod(one, { value: row.value, file: text.path, locate: () => undefined });
-        const { file: _f, line: _l, column: _c, field: _field, ...rest } = worded!;
-        return toIssue(row.placeOf(path), rest, unknownKey !== undefined);
-      }),
-    issueOf: (problem) => {
-      const { path, ...rest } = problem;
-      return toIssue(row.placeOf(path), rest);
-    },
-  }));
+  const entries = read.rows.map((row): Entry => {
+    const place: Place = { file: text.path, line: row.line };
+    return {
+      raw: row.value,
+      path: [],
+      place,
+      placeLater: () => place,
+      unreadable: row.unreadable,
+      notes: row.notes,
+      issuesOf: (error) =>
+        error.issues.map((zodIssue) => {
+          // An unknown field is placed by its own key, which only common can hold.
+          const unknownKey = zodIssue.code === 'unrecognized_keys' ? (zodIssue as { keys: string[] }).keys[0] : undefined;
+          const path = [...(zodIssue.path as (string | number)[]), ...(unknownKey !== undefined ? [unknownKey] : [])];
+          const one = { issues: [zodIssue] } as unknown as z.ZodError;
+          // issuesFromZod words the issue; the place and field are the row's.
+          const [worded] = issuesFromZod(one, { value: row.value, file: text.path, locate: () => undefined });
+          const { file: _f, line: _l, column: _c, field: _field, ...rest } = worded!;
+          return toIssue(row.placeOf(path), rest, unknownKey !== undefined);
+        }),
+      issueOf: (problem) => {
+        const { path, ...rest } = problem;
+        return toIssue(row.placeOf(path), rest);
+      },
+    };
+  });
   return { entries, issues };
 }
 

@@ -22,24 +22,34 @@ export async function writeFileAtomic(path: string, data: string | Buffer | Chun
   // Same directory, so that the rename stays on one file system and is atomic.
   const temp = join(dirname(path), `.${basename(path)}.${process.pid}.${randomBytes(4).toString('hex')}.tmp`);
   let handle: Awaited<ReturnType<typeof open>> | undefined;
+  let inFlight: Promise<unknown> = Promise.resolve();
   try {
     handle = await open(temp, 'wx', 0o644);
     if (typeof data === 'string' || Buffer.isBuffer(data)) await handle.writeFile(data);
     else {
+      // One block is written while the next is made: the file system's time and the making
+      // of the text overlap (about 0.2 s of waiting on a 97 MB results file, bench/sweep.mjs).
+      // Only one write is ever in flight, so the blocks reach the file in order.
+      const file = handle;
       let block = '';
       for (const chunk of data) {
         block += chunk;
         if (block.length >= BLOCK) {
-          await handle.write(block);
+          await inFlight;
+          inFlight = file.write(block);
+          // a failed write is rethrown by the next await; until then it must not count as unhandled
+          inFlight.catch(() => undefined);
           block = '';
         }
       }
+      await inFlight;
       if (block) await handle.write(block);
     }
     await handle.close();
     handle = undefined;
     await rename(temp, path);
   } catch (err) {
+    await inFlight.catch(() => undefined);
     if (handle) await handle.close().catch(() => undefined);
     await rm(temp, { force: true }).catch(() => undefined);
     throw err;

@@ -59,4 +59,25 @@ describe('writeFileAtomic', () => {
   it('fails cleanly when the folder does not exist', async () => {
     await expect(writeFileAtomic(join(dir, 'missing', 'r.html'), 'x')).rejects.toThrow(/ENOENT/);
   });
+
+  it('writes text made piece by piece in order, several blocks long', async () => {
+    const path = join(dir, 'long.json');
+    // 3.5 MB in pieces of 70 kB: several 1 MB blocks, each written while the next is made
+    const pieces = Array.from({ length: 50 }, (_, k) => `${String(k).padStart(2, '0')}:${'x'.repeat(70_000)}\n`);
+    await writeFileAtomic(path, (function* () { yield* pieces; })());
+    expect(readFileSync(path, 'utf8')).toBe(pieces.join(''));
+    expect(leftovers(dir)).toEqual([]);
+  });
+
+  it('keeps the existing file and leaves nothing behind when making the text fails after blocks were written', async () => {
+    const path = join(dir, 'sweep.json');
+    writeFileSync(path, 'the last good results');
+    function* failing(): Generator<string> {
+      for (let k = 0; k < 5; k += 1) yield 'y'.repeat(600_000);
+      throw new Error('rendering broke half-way');
+    }
+    await expect(writeFileAtomic(path, failing())).rejects.toThrow('rendering broke half-way');
+    expect(readFileSync(path, 'utf8')).toBe('the last good results');
+    expect(leftovers(dir)).toEqual([]);
+  });
 });
