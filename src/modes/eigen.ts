@@ -3,9 +3,9 @@
  *
  * The matrix is balanced first (balance.ts) so mixed state units cost no accuracy.
  * The real Schur route (real-eigen.ts: Hessenberg reduction and shifted QR) returns real
- * eigenvectors V: for a complex pair in columns j, j+1 (imaginary
- * part of eigenvalue j positive) the eigenvector of lambda_j is V[:,j] + i V[:,j+1] and that of
- * its conjugate V[:,j] - i V[:,j+1]. Writing the complex eigenvector matrix as Vc = V P with
+ * eigenvectors V: for a complex pair in columns j, j+1 (imaginary part of eigenvalue j
+ * positive) the eigenvector of lambda_j is V[:,j] + i V[:,j+1] and that of its conjugate
+ * V[:,j] - i V[:,j+1]. Writing the complex eigenvector matrix as Vc = V P with
  * P = [[1, 1], [i, -i]] on each pair gives the left eigenvectors Wc = Vc^-1 = P^-1 V^-1 with
  * P^-1 = 1/2 [[1, -i], [1, i]]: only the real inverse of V is needed (Golub and Van Loan,
  * Matrix Computations, 4th ed., ch. 7; the row-j relation Wc A = Lambda Wc defines the
