@@ -6,9 +6,9 @@
 import { dedupeIssues, InputError } from './errors.js';
 import { loadCriteriaSet } from './load/criteria-file.js';
 import { loadModel } from './load/load-model.js';
-import { assembleResults } from './results.js';
+import { assembleResults, resultsHead } from './results.js';
 import { checkAllConditions } from './sweep/check-all.js';
-import type { AircraftModel, InputFile, ResolvedCriteriaSet, Results } from './types.js';
+import type { AircraftModel, ConditionResult, InputFile, ResolvedCriteriaSet, Results } from './types.js';
 
 export interface CheckRequest {
   /** path of the model file */
@@ -23,12 +23,32 @@ export interface CheckRequest {
   onProgress?: (done: number, total: number) => void;
   /** worker threads for the conditions: 0 = none; absent = chosen by their number (no effect on the results) */
   workers?: number;
+  /**
+   * Called once the model and criteria are read and before any condition is checked, with
+   * the results as they will be but for `summary` and `conditions`, and the number of
+   * conditions (e.g. to start writing the results file).
+   */
+  onStart?: (head: Omit<Results, 'summary' | 'conditions'>, total: number) => void;
+  /**
+   * Called with each condition's result as soon as it is checked, in the order of the model
+   * (e.g. to write it out at once); `total` is the number of conditions.
+   */
+  onCondition?: (result: ConditionResult, total: number) => void;
+  /**
+   * Which conditions' results the outcome keeps in `results.conditions`; absent = all. The
+   * summary still counts every condition. With either of these the conditions are checked in
+   * the main thread.
+   */
+  keep?: (result: ConditionResult, total: number) => boolean;
 }
 
 export interface CheckOutcome {
   model: AircraftModel;
   sets: ResolvedCriteriaSet[];
+  /** `conditions` holds every condition, or only those the request's `keep` kept */
   results: Results;
+  /** the number of conditions checked */
+  conditionCount: number;
 }
 
 export async function runCheck(request: CheckRequest): Promise<CheckOutcome> {
@@ -36,17 +56,23 @@ export async function runCheck(request: CheckRequest): Promise<CheckOutcome> {
   const loaded = await Promise.all(request.criteria.map((ref) => loadCriteriaSet(ref)));
   const sets = loaded.map((l) => l.set);
 
-  // per condition: analyse the modes, evaluate every set, assemble (worker threads for a big sweep)
-  const { results: conditions, issues } = await checkAllConditions(model, sets, {
-    ...(request.workers !== undefined ? { workers: request.workers } : {}),
-    ...(request.onProgress ? { onProgress: request.onProgress } : {}),
-  });
-  if (issues.length > 0) throw new InputError(dedupeIssues(issues));
-
   const inputs: InputFile[] = [
     ...modelFiles,
     ...loaded.flatMap((l) => l.files.map((f) => ({ role: 'criteria' as const, path: f.path, sha256: f.sha256 }))),
   ];
-  const results = assembleResults({ request, model, sets, inputs, conditions });
-  return { model, sets, results };
+  const total = model.conditions.length;
+  request.onStart?.(resultsHead({ request, model, sets, inputs }), total);
+
+  // per condition: analyse the modes, evaluate every set, assemble (worker threads for a big sweep)
+  const { onCondition, keep } = request;
+  const { results: conditions, issues, summary } = await checkAllConditions(model, sets, {
+    ...(request.workers !== undefined ? { workers: request.workers } : {}),
+    ...(request.onProgress ? { onProgress: request.onProgress } : {}),
+    ...(onCondition ? { onResult: (r: ConditionResult) => onCondition(r, total) } : {}),
+    ...(keep ? { keep: (r: ConditionResult) => keep(r, total) } : {}),
+  });
+  if (issues.length > 0) throw new InputError(dedupeIssues(issues));
+
+  const results = assembleResults({ request, model, sets, inputs, conditions, summary });
+  return { model, sets, results, conditionCount: total };
 }

@@ -8,6 +8,10 @@ import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { Command, CommanderError, Option } from 'commander';
 import { runCheck, type CheckOutcome } from './check.js';
+import { hasIssue } from './report/condition-status.js';
+import { INDENT_UP_TO_CONDITIONS, type ResultsHead } from './report/json.js';
+import { ResultsJsonFile } from './report/results-json-file.js';
+import type { ConditionResult } from './types.js';
 import { compareResults } from './compare/compare-results.js';
 import { formatComparisonText } from './compare/format-comparison.js';
 import { parseBaselineResults } from './compare/compare-results.js';
@@ -15,7 +19,7 @@ import { formatCriteriaSetText } from './report/criteria-text.js';
 import { InputError } from './errors.js';
 import { loadCriteriaSet } from './load/criteria-file.js';
 import { readInputFile } from './load/read-file.js';
-import { renderOutputs, writeArtifacts, type OutputRequest } from './outputs.js';
+import { checkOutputPaths, renderOutputs, writeArtifacts, type OutputRequest } from './outputs.js';
 import { formatResultsText } from './report/terminal.js';
 import { progressReporter } from './progress.js';
 
@@ -108,6 +112,9 @@ export async function main(argv: string[], io: Io = defaultIo()): Promise<number
   }
 }
 
+/** Above this many conditions the terminal and the report list only conditions with issues, unless asked. */
+const LARGE_RUN = 50;
+
 interface CheckCommandOptions {
   criteria: string[];
   html?: string;
@@ -124,28 +131,71 @@ interface CheckCommandOptions {
 async function checkCommand(modelPath: string, opts: CheckCommandOptions, argv: string[], io: Io): Promise<number> {
   const criteria = opts.criteria.length > 0 ? opts.criteria : [DEFAULT_CRITERIA];
   if (opts.criteria.length === 0) io.out(`no --criteria given: using the shipped set ${DEFAULT_CRITERIA}`);
-  // Read the baseline before any work, so a bad baseline is reported at once.
+  // Read the baseline and check the output folders before any work, so that a bad baseline
+  // or an output that cannot be written is reported at once.
   const baseline = opts.baseline ? await readInputFile(opts.baseline) : undefined;
+  await checkOutputPaths([opts.html, opts.pdf, opts.json, opts.junit].filter((p): p is string => p !== undefined));
+  // A large sweep written only to JSON (and the terminal) is written out as it is checked;
+  // only the conditions the terminal lists are kept whole. The report, JUnit and a comparison
+  // need every result, so with any of them the results are kept and written at the end.
+  const detailFor = (total: number) => opts.detail ?? (total > LARGE_RUN ? 'issues' : 'all');
+  const streamable = opts.json !== undefined && !opts.html && !opts.pdf && !opts.junit && !baseline;
+  let stream: ResultsJsonFile | undefined;
   const progress = progressReporter();
-  const outcome = await runCheck({ model: modelPath, criteria, ...runContext(argv, io), onProgress: progress.onProgress }).finally(
-    progress.stop,
-  );
+  const outcome = await runCheck({
+    model: modelPath,
+    criteria,
+    ...runContext(argv, io),
+    onProgress: progress.onProgress,
+    ...(streamable
+      ? {
+          onStart: (head: ResultsHead, total: number) => {
+            if (total > INDENT_UP_TO_CONDITIONS) stream = ResultsJsonFile.open(opts.json!, head);
+          },
+          onCondition: (r: ConditionResult) => stream?.add(r),
+          keep: (r: ConditionResult, total: number) => stream === undefined || keepFor(detailFor(total), r),
+        }
+      : {}),
+  })
+    .catch((err: unknown) => {
+      stream?.abort();
+      throw err;
+    })
+    .finally(progress.stop);
+  try {
+    return await reportCheck(outcome, { modelPath, opts, baseline, detail: detailFor(outcome.conditionCount), stream }, io);
+  } catch (err) {
+    stream?.abort();
+    throw err;
+  }
+}
+
+interface ReportContext {
+  modelPath: string;
+  opts: CheckCommandOptions;
+  baseline: Awaited<ReturnType<typeof readInputFile>> | undefined;
+  detail: 'all' | 'issues' | 'none';
+  /** the results file being written as the conditions were checked, if so */
+  stream: ResultsJsonFile | undefined;
+}
+
+async function reportCheck(outcome: CheckOutcome, context: ReportContext, io: Io): Promise<number> {
+  const { modelPath, opts, baseline, detail, stream } = context;
   if (baseline) outcome.results.inputs.push({ role: 'baseline', path: baseline.path, sha256: baseline.sha256 });
   const comparison = baseline ? compareResults(outcome.results, parseBaselineResults(baseline.text, baseline.path)) : undefined;
 
-  const large = outcome.results.conditions.length > 50;
-  const detail = opts.detail ?? (large ? 'issues' : 'all');
-  if (!opts.detail && large) io.out(`${outcome.results.conditions.length} conditions: per-condition detail limited to conditions with issues (--detail all to list every one)`);
+  const total = outcome.conditionCount;
+  if (!opts.detail && total > LARGE_RUN) io.out(`${total} conditions: per-condition detail limited to conditions with issues (--detail all to list every one)`);
 
   const wantsFile = Boolean(opts.html || opts.pdf || opts.json || opts.junit);
   const html = opts.html ?? (wantsFile ? undefined : defaultHtmlPath(modelPath));
-  io.out(formatResultsText(outcome.results, { color: io.color, detail, findings: true }));
+  io.out(formatResultsText(outcome.results, { color: io.color, detail, findings: true, conditionCount: total }));
   if (comparison) io.out(`\n${formatComparisonText(comparison, { color: io.color })}`);
 
   const request: OutputRequest = {
     ...(html ? { html } : {}),
     ...(opts.pdf ? { pdf: opts.pdf } : {}),
-    ...(opts.json ? { json: opts.json } : {}),
+    ...(opts.json && !stream ? { json: opts.json } : {}),
     ...(opts.junit ? { junit: opts.junit } : {}),
     ...(opts.browser ? { browser: opts.browser } : {}),
     ...(comparison ? { comparison } : {}),
@@ -154,6 +204,10 @@ async function checkCommand(modelPath: string, opts: CheckCommandOptions, argv: 
     detail,
   };
   await writeAndTell(outcome, request, io);
+  if (stream) {
+    stream.finish(outcome.results.summary);
+    io.out(`wrote JSON ${stream.path}`);
+  }
 
   const s = outcome.results.summary;
   if (s.fail > 0 || (opts.failOn === 'marginal' && s.marginal > 0)) return EXIT.findingFailed;
@@ -168,6 +222,11 @@ async function writeAndTell(outcome: CheckOutcome, request: OutputRequest, io: I
 
 function runContext(argv: string[], io: Io) {
   return { toolVersion: toolVersion(), command: ['modalgate', ...argv], generatedAt: io.now().toISOString() };
+}
+
+/** Whether the terminal lists a condition under `detail`, so that its whole result must be kept. */
+function keepFor(detail: 'all' | 'issues' | 'none', result: ConditionResult): boolean {
+  return detail === 'all' || (detail === 'issues' && hasIssue(result));
 }
 
 function defaultHtmlPath(modelPath: string): string {

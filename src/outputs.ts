@@ -5,6 +5,11 @@
 import { createHash } from 'node:crypto';
 import type { CheckOutcome } from './check.js';
 import type { Comparison } from './compare/compare-results.js';
+import { constants } from 'node:fs';
+import { access, stat } from 'node:fs/promises';
+import { dirname } from 'node:path';
+import { InputError, InternalError, type InputIssue } from './errors.js';
+import { outputError } from './report/output-error.js';
 import { resultsJsonChunks } from './report/json.js';
 import { renderJunit } from './report/junit.js';
 import { writeFileAtomic, type Chunks } from './report/write-atomic.js';
@@ -38,6 +43,10 @@ export function reportIdOf(outcome: CheckOutcome): string {
 export async function renderOutputs(outcome: CheckOutcome, request: OutputRequest): Promise<Artifact[]> {
   const artifacts: Artifact[] = [];
   const { results, sets } = outcome;
+  const wantsAny = Boolean(request.json || request.junit || request.html || request.pdf || request.comparison);
+  if (wantsAny && results.conditions.length !== outcome.conditionCount) {
+    throw new InternalError('an output that needs every condition was asked of a check that kept only some');
+  }
   if (request.json) artifacts.push({ kind: 'json', path: request.json, data: resultsJsonChunks(results) });
   if (request.junit) artifacts.push({ kind: 'junit', path: request.junit, data: renderJunit(results, { failOn: request.failOn }) });
   if (request.html || request.pdf) {
@@ -64,6 +73,27 @@ export async function renderOutputs(outcome: CheckOutcome, request: OutputReques
     }
   }
   return artifacts;
+}
+
+/**
+ * Fail before any work when an output cannot be written where it is asked for (a missing
+ * folder, no permission, a folder of that name): a long sweep should not run first, and one
+ * report must not be written when the next one then cannot be.
+ */
+export async function checkOutputPaths(paths: readonly string[]): Promise<void> {
+  const issues: InputIssue[] = [];
+  for (const path of paths) {
+    try {
+      await access(dirname(path), constants.W_OK);
+      const existing = await stat(path).catch(() => undefined);
+      if (existing?.isDirectory()) throw Object.assign(new Error('is a directory'), { code: 'EISDIR' });
+    } catch (err) {
+      const mapped = outputError(path, err);
+      if (!(mapped instanceof InputError)) throw mapped;
+      issues.push(...mapped.issues);
+    }
+  }
+  if (issues.length > 0) throw new InputError(issues);
 }
 
 export async function writeArtifacts(artifacts: Artifact[]): Promise<void> {

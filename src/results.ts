@@ -47,13 +47,15 @@ export function countVerdicts(findings: Iterable<Finding>): VerdictCounts {
   return counts;
 }
 
-export function assembleResults(parts: {
+export interface ResultsParts {
   request: { toolVersion: string; command: string[]; generatedAt: string };
   model: AircraftModel;
   sets: ResolvedCriteriaSet[];
   inputs: InputFile[];
-  conditions: ConditionResult[];
-}): Results {
+}
+
+/** Everything of the results but the summary and the conditions, in the results' key order. */
+export function resultsHead(parts: ResultsParts): Omit<Results, 'summary' | 'conditions'> {
   return {
     format: 'modalgate-results/1',
     tool: { name: 'modalgate', version: parts.request.toolVersion },
@@ -62,7 +64,19 @@ export function assembleResults(parts: {
     inputs: parts.inputs,
     aircraft: { ...parts.model.aircraft },
     criteriaSets: parts.sets.map((s) => ({ id: s.id, title: s.title, chain: s.chain })),
-    summary: countVerdicts(parts.conditions.flatMap((c) => c.findings)),
+  };
+}
+
+export function assembleResults(
+  parts: ResultsParts & {
+    conditions: ConditionResult[];
+    /** verdicts over every condition checked; absent = counted from `conditions` */
+    summary?: VerdictCounts;
+  },
+): Results {
+  return {
+    ...resultsHead(parts),
+    summary: parts.summary ?? countVerdicts(parts.conditions.flatMap((c) => c.findings)),
     conditions: parts.conditions,
   };
 }

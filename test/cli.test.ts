@@ -3,7 +3,7 @@
  * process for the exit code. Contract 3 of the design notes: exit codes 0 / 1 / 2 / 3.
  */
 import { execFileSync, spawnSync } from 'node:child_process';
-import { copyFileSync, existsSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { copyFileSync, existsSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
@@ -109,6 +109,20 @@ describe('modalgate check', () => {
     expect(readFileSync(pdf, 'utf8')).toBe('previous pdf');
   });
 
+  it('an output that cannot be written is exit 2 before any work, and no other output is written', async () => {
+    const dir = scratch();
+    const json = path.join(dir, 'r.json');
+    const html = path.join(dir, 'no-such-folder', 'r.html');
+    const r = await run('check', sample, '--json', json, '--html', html);
+    expect(r.code).toBe(2);
+    expect(r.err).toContain(`${html}: output: cannot write the output file: its folder does not exist (expected a file that can be written, found ENOENT) [output_unwritable]`);
+    expect(r.out).not.toMatch(/summary:/); // nothing was checked
+    expect(existsSync(json)).toBe(false);
+    const folder = await run('check', sample, '--json', dir);
+    expect(folder.code).toBe(2);
+    expect(folder.err).toContain('a folder of that name is in the way');
+  });
+
   it('a missing model file and a usage error are exit 2', async () => {
     const missing = await run('check', path.join(scratch(), 'nope.yaml'));
     expect(missing.code).toBe(2);
@@ -139,6 +153,44 @@ describe('modalgate check', () => {
     expect(xml.startsWith('<?xml')).toBe(true);
     expect((xml.match(/<testcase /g) ?? []).length).toBe(findings.length);
     expect((xml.match(/<failure /g) ?? []).length).toBe(results.summary.fail);
+  });
+});
+
+describe('modalgate check of a large sweep written only to JSON', () => {
+  // 260 conditions of the invented benchmark aircraft: above 200 the file is written as the
+  // conditions are checked (results-json-file.ts) unless another output needs every result.
+  const dir = scratch();
+  const model = path.join(dir, 'sweep.json');
+  execFileSync(process.execPath, [path.join(root, 'bench/make-sweep.mjs'), '--count', '260', '--seed', '11', '--out', model]);
+  const strip = (text: string) => text.replace(/"command":\[[^\]]*\]/, '');
+
+  it('writes the same file and terminal text as the run that keeps every result', async () => {
+    const streamed = path.join(dir, 'streamed.json');
+    const kept = path.join(dir, 'kept.json');
+    const a = await run('check', model, '--json', streamed);
+    const b = await run('check', model, '--json', kept, '--junit', path.join(dir, 'kept.xml'));
+    expect(a.code).toBe(b.code);
+    expect(strip(readFileSync(streamed, 'utf8'))).toBe(strip(readFileSync(kept, 'utf8')));
+    const terminal = (out: string) => out.split('\n').filter((l) => !l.startsWith('wrote '));
+    expect(terminal(a.out)).toEqual(terminal(b.out));
+    expect(a.out).toContain(`wrote JSON ${streamed}`);
+    expect(a.out).toMatch(/of 260 conditions not listed/);
+  });
+
+  it('a condition found bad half-way through: exit 2, the last good file untouched, no temporary file left', async () => {
+    const written = JSON.parse(readFileSync(model, 'utf8'));
+    written.conditions[240].phase = 'ZZ'; // no criteria category for it: found while evaluating
+    const broken = path.join(dir, 'broken.json');
+    writeFileSync(broken, JSON.stringify(written));
+    const out = path.join(dir, 'out');
+    mkdirSync(out);
+    const json = path.join(out, 'results.json');
+    writeFileSync(json, 'the last good results');
+    const r = await run('check', broken, '--json', json);
+    expect(r.code).toBe(2);
+    expect(r.err).toMatch(/ZZ/);
+    expect(readFileSync(json, 'utf8')).toBe('the last good results');
+    expect(readdirSync(out)).toEqual(['results.json']);
   });
 });
 

@@ -9,10 +9,27 @@
  * order, instead of serialising them again. The text is `conditionJson` of those very
  * objects, so the file is the same either way; a condition is never changed after the check,
  * which is what keeps the text valid.
+ *
+ * A large sweep written only to JSON does not wait for the finished results: the command line
+ * writes it as the conditions are checked (results-json-file.ts), from the same pieces
+ * (`compactOpening`, `summaryText`, `conditionJson`), so that file has these same bytes.
  */
-import type { ConditionResult, Results } from '../types.js';
+import { InternalError } from '../errors.js';
+import type { ConditionResult, Results, VerdictCounts } from '../types.js';
 
-const INDENT_UP_TO_CONDITIONS = 200;
+/** Up to this many conditions the file is indented; above, it has one compact line per condition. */
+export const INDENT_UP_TO_CONDITIONS = 200;
+
+/** The results without their summary and conditions: all that is known before the check. */
+export type ResultsHead = Omit<Results, 'summary' | 'conditions'>;
+
+/**
+ * [characters] width of each count in a compact file's summary. The counts are padded with
+ * spaces (JSON allows them there) so that the summary always has the same length: a large
+ * sweep's file is written as it is checked (results-json-file.ts), and its summary, known only
+ * at the end, is then written into the place left for it.
+ */
+const COUNT_WIDTH = 12;
 
 /** [characters] size of a block handed to the file writer */
 const BLOCK = 1 << 20;
@@ -44,10 +61,10 @@ export function* resultsJsonChunks(results: Results): Generator<string> {
     yield `${JSON.stringify(results, null, 2)}\n`;
     return;
   }
-  const { conditions, ...head } = results;
-  const opening = JSON.stringify({ ...head, conditions: [] });
+  const { conditions, summary, ...head } = results;
+  const { before, after } = compactOpening(head);
   const count = conditions.length;
-  let lines: string[] = [`${opening.slice(0, -2)}\n`];
+  let lines: string[] = [`${before}${summaryText(summary)}${after}\n`];
   let size = 0;
   let i = 0;
   while (i < count) {
@@ -70,6 +87,27 @@ export function* resultsJsonChunks(results: Results): Generator<string> {
   }
   lines.push(']}\n');
   yield lines.join('');
+}
+
+/**
+ * A compact file's text up to the conditions, in two parts around the summary:
+ * `before` ends with `"summary":`, `after` is `,"conditions":[`.
+ */
+export function compactOpening(head: ResultsHead): { before: string; after: string } {
+  const tail = ',"summary":null,"conditions":[]}';
+  const text = JSON.stringify({ ...head, summary: null, conditions: [] });
+  if (!text.endsWith(tail)) throw new InternalError('results head: summary and conditions must come last');
+  return { before: `${text.slice(0, -tail.length)},"summary":`, after: ',"conditions":[' };
+}
+
+/** The summary of a compact file, always COUNT_WIDTH characters per count. */
+export function summaryText(summary: VerdictCounts): string {
+  const count = (n: number) => {
+    const text = String(n);
+    if (text.length > COUNT_WIDTH) throw new InternalError(`verdict count ${n} is too large for the results summary`);
+    return text.padStart(COUNT_WIDTH);
+  };
+  return `{"pass":${count(summary.pass)},"marginal":${count(summary.marginal)},"fail":${count(summary.fail)},"not_evaluated":${count(summary.not_evaluated)}}`;
 }
 
 function sameRun(conditions: readonly ConditionResult[], from: number, members: readonly ConditionResult[]): boolean {

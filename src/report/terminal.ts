@@ -13,6 +13,8 @@ export interface TerminalOptions {
   detail: 'all' | 'issues' | 'none';
   /** include the findings tables (false for the `modes` command) */
   findings: boolean;
+  /** conditions checked, when `results.conditions` holds only those kept (see runCheck's `keep`) */
+  conditionCount?: number;
 }
 
 const MAX_LISTED_CONDITIONS = 100;
@@ -42,6 +44,7 @@ export function formatResultsText(results: Results, options: TerminalOptions): s
   if (results.criteriaSets.length > 0) {
     out.push(`criteria: ${results.criteriaSets.map((s) => `${s.id} (${s.chain.join(' > ')})`).join('; ')}`);
   }
+  const total = options.conditionCount ?? results.conditions.length;
   const shown = results.conditions.filter((c) => showCondition(c, options.detail));
   // With detail 'issues' (the default for sweeps) a condition gets its heading and the
   // findings that are not a pass; the full tables are in the report and the JSON.
@@ -68,10 +71,10 @@ export function formatResultsText(results: Results, options: TerminalOptions): s
     out.push('');
     out.push(`... and ${shown.length - listed.length} more condition(s) with a finding that is not a pass: see the report or the results JSON`);
   }
-  if (shown.length < results.conditions.length) {
+  if (shown.length < total) {
     out.push('');
     out.push(
-      `${results.conditions.length - shown.length} of ${results.conditions.length} conditions not listed (detail: ${options.detail}${options.detail === 'issues' ? ': only conditions with a fail, marginal or not-evaluated finding' : ''}).`,
+      `${total - shown.length} of ${total} conditions not listed (detail: ${options.detail}${options.detail === 'issues' ? ': only conditions with a fail, marginal or not-evaluated finding' : ''}).`,
     );
   }
   if (options.findings) {
@@ -79,7 +82,7 @@ export function formatResultsText(results: Results, options: TerminalOptions): s
     out.push('');
     out.push(
       `summary: ${s.pass} pass, ${s.marginal} marginal, ${s.fail} fail, ${s.not_evaluated} not evaluated ` +
-        `over ${results.conditions.length} condition(s)`,
+        `over ${total} condition(s)`,
     );
   }
   return out.join('\n');

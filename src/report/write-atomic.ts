@@ -12,6 +12,7 @@
 import { randomBytes } from 'node:crypto';
 import { open, rename, rm } from 'node:fs/promises';
 import { basename, dirname, join } from 'node:path';
+import { outputError } from './output-error.js';
 
 /** Text produced piece by piece (e.g. a large results file), written in blocks. */
 export type Chunks = Iterable<string>;
@@ -52,6 +53,6 @@ export async function writeFileAtomic(path: string, data: string | Buffer | Chun
     await inFlight.catch(() => undefined);
     if (handle) await handle.close().catch(() => undefined);
     await rm(temp, { force: true }).catch(() => undefined);
-    throw err;
+    throw outputError(path, err);
   }
 }

@@ -11,7 +11,7 @@
  */
 import { availableParallelism } from 'node:os';
 import type { AircraftModel, ResolvedCriteriaSet } from '../types.js';
-import { checkConditions, type ConditionsChecked } from './check-conditions.js';
+import { checkConditions, type CheckEach, type ConditionsChecked } from './check-conditions.js';
 import { checkConditionsInWorkers } from './worker-pool.js';
 
 /** Fewer conditions than this are checked in the main thread. */
@@ -25,6 +25,12 @@ export interface CheckAllOptions {
   /** worker threads to use: 0 = main thread only; absent = chosen by the number of conditions */
   workers?: number;
   onProgress?: (done: number, total: number) => void;
+  /**
+   * Each result as it is checked, and which to keep: both run the conditions in the main
+   * thread (a result leaves a worker only as a whole batch).
+   */
+  onResult?: CheckEach['onResult'];
+  keep?: CheckEach['keep'];
 }
 
 /** Worker threads for a sweep of `count` conditions: none below PARALLEL_FROM or MIN_CORES. */
@@ -39,11 +45,16 @@ export async function checkAllConditions(
   options: CheckAllOptions = {},
 ): Promise<ConditionsChecked> {
   const { conditions } = model;
-  const workers = options.workers ?? workersFor(conditions.length);
+  const streamed = options.onResult !== undefined || options.keep !== undefined;
+  const workers = streamed ? 0 : (options.workers ?? workersFor(conditions.length));
   const total = conditions.length;
   if (workers === 0) {
     const onEach = options.onProgress ? (done: number) => options.onProgress!(done, total) : undefined;
-    return checkConditions(conditions, model.aircraft.class, sets, onEach);
+    return checkConditions(conditions, model.aircraft.class, sets, {
+      ...(onEach ? { onEach } : {}),
+      ...(options.onResult ? { onResult: options.onResult } : {}),
+      ...(options.keep ? { keep: options.keep } : {}),
+    });
   }
   return checkConditionsInWorkers(conditions, model.aircraft.class, sets, {
     workers,

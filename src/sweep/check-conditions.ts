@@ -7,28 +7,44 @@ import { evaluateCondition } from '../criteria/evaluate.js';
 import { InputError, type InputIssue } from '../errors.js';
 import { analyseModes } from '../modes/analyse.js';
 import { assembleCondition } from '../results.js';
-import type { AircraftClass, ConditionResult, FlightCondition, ResolvedCriteriaSet } from '../types.js';
+import type { AircraftClass, ConditionResult, FlightCondition, ResolvedCriteriaSet, VerdictCounts } from '../types.js';
 
 export interface ConditionsChecked {
-  /** one per condition, in the order given */
+  /** one per condition, in the order given (only those kept, when a `keep` test was given) */
   results: ConditionResult[];
   /** input problems found while evaluating (e.g. a phase a criteria set has no category for) */
   issues: InputIssue[];
+  /** verdicts over the findings of every condition checked, kept or not */
+  summary: VerdictCounts;
+}
+
+export interface CheckEach {
+  /** called after each condition with the number done */
+  onEach?: (done: number) => void;
+  /** called with each condition's result as soon as it is checked, in order */
+  onResult?: (result: ConditionResult) => void;
+  /** which results to keep in `results`; absent = all */
+  keep?: (result: ConditionResult) => boolean;
 }
 
 export function checkConditions(
   conditions: readonly FlightCondition[],
   aircraftClass: AircraftClass,
   sets: readonly ResolvedCriteriaSet[],
-  onEach?: (done: number) => void,
+  each: CheckEach = {},
 ): ConditionsChecked {
   const results: ConditionResult[] = [];
   const issues: InputIssue[] = [];
+  const summary: VerdictCounts = { pass: 0, marginal: 0, fail: 0, not_evaluated: 0 };
+  const { onEach, onResult, keep } = each;
   for (let index = 0; index < conditions.length; index += 1) {
-    results.push(checkOneCondition(conditions[index]!, aircraftClass, sets, issues));
+    const result = checkOneCondition(conditions[index]!, aircraftClass, sets, issues);
+    for (const f of result.findings) summary[f.verdict] += 1;
+    onResult?.(result);
+    if (keep === undefined || keep(result)) results.push(result);
     onEach?.(index + 1);
   }
-  return { results, issues };
+  return { results, issues, summary };
 }
 
 /** One condition; its input problems are added to `issues`, any other error is thrown. */

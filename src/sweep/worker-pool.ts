@@ -7,6 +7,7 @@
 import { Worker } from 'node:worker_threads';
 import { InternalError, type InputIssue } from '../errors.js';
 import { rememberConditionsJson } from '../report/json.js';
+import { countVerdicts } from '../results.js';
 import type { AircraftClass, ConditionResult, FlightCondition, ResolvedCriteriaSet } from '../types.js';
 import { checkConditions, type ConditionsChecked } from './check-conditions.js';
 import type { BatchMessage, ShareMessage, WorkerMessage } from './messages.js';
@@ -43,7 +44,7 @@ export async function checkConditionsInWorkers(
   );
   let mine: ConditionsChecked;
   try {
-    mine = checkConditions(conditions.slice(own![0], own![1]), aircraftClass, sets, () => progress(1));
+    mine = checkConditions(conditions.slice(own![0], own![1]), aircraftClass, sets, { onEach: () => progress(1) });
   } catch (err) {
     for (const share of shares) {
       share.stop();
@@ -58,7 +59,7 @@ export async function checkConditionsInWorkers(
     for (const r of part.results) results.push(r);
     for (const i of part.issues) issues.push(i);
   }
-  return { results, issues };
+  return { results, issues, summary: countVerdicts(results.flatMap((r) => r.findings)) };
 }
 
 /** [from, to) ranges of `count` nearly equal contiguous shares of `n` items */
@@ -85,7 +86,7 @@ function runShare(share: ShareMessage, progress: (n: number) => void): RunningSh
       settled = true;
       void worker.terminate();
       if (error) reject(error);
-      else resolve({ results, issues });
+      else resolve({ results, issues, summary: countVerdicts(results.flatMap((r) => r.findings)) });
     };
     worker.on('message', (message: WorkerMessage) => {
       if (message.type === 'batch') {

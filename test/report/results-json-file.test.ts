@@ -1,0 +1,65 @@
+/**
+ * A large sweep's results file written as the conditions are checked: the same bytes as the
+ * writer of finished results, and nothing changed or left behind when the run fails.
+ */
+import { execFileSync } from 'node:child_process';
+import { existsSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { runCheck } from '../../src/check.js';
+import { INDENT_UP_TO_CONDITIONS, renderResultsJson, type ResultsHead } from '../../src/report/json.js';
+import { ResultsJsonFile } from '../../src/report/results-json-file.js';
+import type { CheckOutcome } from '../../src/check.js';
+
+const ROOT = fileURLToPath(new URL('../../', import.meta.url));
+const dir = mkdtempSync(join(tmpdir(), 'mg-results-file-'));
+const model = join(dir, 'sweep.json');
+let outcome: CheckOutcome;
+
+beforeAll(async () => {
+  // the invented benchmark aircraft, 260 seeded conditions: more than are written indented
+  execFileSync(process.execPath, [join(ROOT, 'bench/make-sweep.mjs'), '--count', '260', '--seed', '11', '--out', model]);
+  outcome = await runCheck({ model, criteria: ['mil-f-8785c'], toolVersion: 'test', command: ['modalgate'], generatedAt: '2026-12-02T00:00:00.000Z' });
+  expect(outcome.results.conditions.length).toBeGreaterThan(INDENT_UP_TO_CONDITIONS);
+});
+afterAll(() => rmSync(dir, { recursive: true, force: true }));
+
+function headOf(o: CheckOutcome): ResultsHead {
+  const { summary: _summary, conditions: _conditions, ...head } = o.results;
+  return head;
+}
+
+const leftovers = () => readdirSync(dir).filter((name) => name.endsWith('.tmp'));
+
+describe('ResultsJsonFile', () => {
+  it('writes exactly the bytes of the finished-results writer, summary included', () => {
+    const path = join(dir, 'streamed.json');
+    const file = ResultsJsonFile.open(path, headOf(outcome));
+    for (const c of outcome.results.conditions) file.add(c);
+    expect(existsSync(path)).toBe(false); // nothing in place until it is finished
+    file.finish(outcome.results.summary);
+    expect(readFileSync(path, 'utf8')).toBe(renderResultsJson(outcome.results));
+    expect(JSON.parse(readFileSync(path, 'utf8')).summary).toEqual(outcome.results.summary);
+    expect(leftovers()).toEqual([]);
+  });
+
+  it('leaves the last good file as it was when abandoned half-way', () => {
+    const path = join(dir, 'kept.json');
+    writeFileSync(path, 'the last good results');
+    const file = ResultsJsonFile.open(path, headOf(outcome));
+    for (const c of outcome.results.conditions.slice(0, 120)) file.add(c);
+    expect(leftovers()).toHaveLength(1);
+    file.abort();
+    file.abort(); // twice is harmless
+    expect(readFileSync(path, 'utf8')).toBe('the last good results');
+    expect(leftovers()).toEqual([]);
+    expect(() => file.add(outcome.results.conditions[0]!)).toThrow(/finished or abandoned/);
+  });
+
+  it('pads the summary counts to one width, which JSON readers ignore', () => {
+    const text = renderResultsJson(outcome.results);
+    expect(text).toMatch(/"summary":\{"pass": +\d+,"marginal": +\d+,"fail": +\d+,"not_evaluated": +\d+\}/);
+  });
+});
