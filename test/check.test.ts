@@ -61,3 +61,31 @@ describe('pipeline: Navion worked example (Nelson 2nd ed. ch. 4-5; NASA CR-96008
     expect(results.summary).toEqual({ pass: cruise!.findings.length + approach!.findings.length, marginal: 0, fail: 0, not_evaluated: 0 });
   });
 });
+
+describe('runCheck hooks for writing results as they come', () => {
+  const sample = path.resolve(import.meta.dirname, '../samples/ketra-kt4.yaml');
+  const request = { model: sample, criteria: ['mil-f-8785c'], toolVersion: 'test', command: [], generatedAt: '2026-12-02T00:00:00Z' };
+
+  it('announces the head first, hands over every result in order, keeps only what is asked and still counts all', async () => {
+    const full = await runCheck(request);
+    const seen: string[] = [];
+    let head: unknown;
+    const outcome = await runCheck({
+      ...request,
+      onStart: (h, total) => {
+        expect(seen).toEqual([]); // before any condition
+        expect(total).toBe(4);
+        head = h;
+      },
+      onCondition: (r) => seen.push(r.id),
+      keep: (r) => r.findings.some((f) => f.verdict === 'fail'),
+    });
+    const { summary, conditions, ...fullHead } = full.results;
+    expect(head).toEqual(fullHead);
+    expect(seen).toEqual(conditions.map((c) => c.id));
+    expect(outcome.conditionCount).toBe(4);
+    expect(outcome.results.conditions.map((c) => c.id)).toEqual(['approach-300m', 'climb-1500m']);
+    expect(outcome.results.summary).toEqual(summary); // 34 pass, 1 marginal, 3 fail over all four
+  });
+});
+
