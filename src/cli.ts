@@ -142,29 +142,25 @@ async function checkCommand(modelPath: string, opts: CheckCommandOptions, argv: 
   const streamable = opts.json !== undefined && !opts.html && !opts.pdf && !opts.junit && !baseline;
   let stream: ResultsJsonFile | undefined;
   const progress = progressReporter();
-  const outcome = await runCheck({
-    model: modelPath,
-    criteria,
-    ...runContext(argv, io),
-    onProgress: progress.onProgress,
-    ...(streamable
-      ? {
-          onStart: (head: ResultsHead, total: number) => {
-            if (total > INDENT_UP_TO_CONDITIONS) stream = ResultsJsonFile.open(opts.json!, head);
-          },
-          onCondition: (r: ConditionResult) => stream?.add(r),
-          keep: (r: ConditionResult, total: number) => stream === undefined || keepFor(detailFor(total), r),
-        }
-      : {}),
-  })
-    .catch((err: unknown) => {
-      stream?.abort();
-      throw err;
-    })
-    .finally(progress.stop);
   try {
+    const outcome = await runCheck({
+      model: modelPath,
+      criteria,
+      ...runContext(argv, io),
+      onProgress: progress.onProgress,
+      ...(streamable
+        ? {
+            onStart: (head: ResultsHead, total: number) => {
+              if (total > INDENT_UP_TO_CONDITIONS) stream = ResultsJsonFile.open(opts.json!, head);
+            },
+            onCondition: (r: ConditionResult) => stream?.add(r),
+            keep: (r: ConditionResult, total: number) => stream === undefined || keepFor(detailFor(total), r),
+          }
+        : {}),
+    }).finally(progress.stop);
     return await reportCheck(outcome, { modelPath, opts, baseline, detail: detailFor(outcome.conditionCount), stream }, io);
   } catch (err) {
+    // a results file begun during the check is dropped; the last good one stays in place
     stream?.abort();
     throw err;
   }

@@ -4,6 +4,7 @@
  * criteria came or went, and whether the model or the criteria files are not the ones checked
  * before. Pure: the caller reads the baseline file (see parseBaselineResults).
  */
+import { countVerdicts } from '../results.js';
 import type { ConditionResult, Finding, Level, ModeKind, Quantity, Results, Verdict, VerdictCounts } from '../types.js';
 import { figureChange, type FigureChange } from './figure-change.js';
 import { compareInputs, type InputsComparison } from './input-changes.js';
@@ -235,9 +236,7 @@ function orderFindings(changes: FindingChange[]): FindingChange[] {
 }
 
 function presenceOf(c: ConditionResult): ConditionPresence {
-  const summary: VerdictCounts = { pass: 0, marginal: 0, fail: 0, not_evaluated: 0 };
-  for (const f of c.findings) summary[f.verdict] += 1;
-  return { id: c.id, phase: c.phase, summary };
+  return { id: c.id, phase: c.phase, summary: countVerdicts(c.findings) };
 }
 
 function findingPresence(condition: string, f: Finding): FindingPresence {

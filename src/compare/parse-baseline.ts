@@ -10,7 +10,8 @@ import { z } from 'zod';
 import { InputError, type InputIssue } from '../errors.js';
 import { parseStructuredText } from '../load/structured-text.js';
 import { issuesFromZod } from '../load/zod-issues.js';
-import type { ConditionResult, Finding, Mode, Results, VerdictCounts } from '../types.js';
+import { countVerdicts } from '../results.js';
+import type { ConditionResult, Finding, Mode, Results } from '../types.js';
 
 const modeKind = z.enum(['short_period', 'phugoid', 'dutch_roll', 'roll', 'spiral', 'roll_spiral', 'kinematic', 'other']);
 const quantity = z.enum(['damping_ratio', 'natural_frequency', 'cap', 'damping_frequency_product', 'time_to_double', 'time_constant']);
@@ -116,8 +117,7 @@ export function parseBaselineResults(text: string, file: string): Results {
   if (issues.length > 0) throw new InputError(issues);
 
   const conditions = written.conditions.map(toConditionResult);
-  const summary: VerdictCounts = { pass: 0, marginal: 0, fail: 0, not_evaluated: 0 };
-  for (const c of conditions) for (const f of c.findings) summary[f.verdict] += 1;
+  const summary = countVerdicts(conditions.flatMap((c) => c.findings));
   return {
     format: written.format,
     tool: written.tool,

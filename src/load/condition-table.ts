@@ -14,6 +14,7 @@ import { describeFound, formatPath, type InputIssue } from '../errors.js';
 import type { ModelProblem } from '../model/problem.js';
 import { parseCsv, type CsvCell } from './csv.js';
 import { readColumns, type ColumnTarget } from './table-columns.js';
+import { valueAt } from './value-at.js';
 
 export interface ConditionTableSpec {
   file: string;
@@ -230,15 +231,6 @@ function placeInRow(path: readonly (string | number)[], targets: (ColumnTarget &
 
 function startsWith(path: readonly (string | number)[], prefix: readonly (string | number)[]): boolean {
   return prefix.length <= path.length && prefix.every((k, i) => path[i] === k);
-}
-
-function valueAt(root: unknown, path: readonly (string | number)[]): unknown {
-  let v: unknown = root;
-  for (const key of path) {
-    if (v === null || typeof v !== 'object') return undefined;
-    v = (v as Record<string | number, unknown>)[key];
-  }
-  return v;
 }
 
 function setAt(root: Record<string, unknown>, path: readonly (string | number)[], value: unknown): void {

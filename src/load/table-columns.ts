@@ -7,6 +7,7 @@
  */
 import { conditionSchema } from './model-schema.js';
 import { kindOf, schemaAt } from './schema-field.js';
+import { valueAt } from './value-at.js';
 
 export interface ColumnTarget {
   /** the field path as written in `columns` */
@@ -85,7 +86,7 @@ function matrixEntry(field: string, keys: string[], indices: string[], common: R
   const path: (string | number)[] = [...keys];
   for (const [k, axis] of axes.entries()) {
     const listPath = [...owner, axis];
-    const names = valueAtKeys(common, listPath);
+    const names = valueAt(common, listPath);
     const where = `common.${listPath.join('.')}`;
     if (!Array.isArray(names)) {
       return { problem: { message: `${matrix} entries are named by ${axis}, but ${where} is not given`, expected: `${where}: [..] in conditionTable.common`, found: 'nothing', code: 'column_field' } };
@@ -99,11 +100,3 @@ function matrixEntry(field: string, keys: string[], indices: string[], common: R
   return { path, kind: 'number' };
 }
 
-function valueAtKeys(root: unknown, keys: readonly (string | number)[]): unknown {
-  let v: unknown = root;
-  for (const key of keys) {
-    if (v === null || typeof v !== 'object') return undefined;
-    v = (v as Record<string | number, unknown>)[key];
-  }
-  return v;
-}

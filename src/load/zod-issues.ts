@@ -2,6 +2,7 @@
 import type { z } from 'zod';
 import { describeFound, formatPath, type InputIssue } from '../errors.js';
 import type { StructuredText } from './structured-text.js';
+import { valueAt } from './value-at.js';
 
 export function issuesFromZod(error: z.ZodError, source: StructuredText): InputIssue[] {
   return error.issues.map((issue) => {
@@ -62,13 +63,4 @@ function expectedWords(expected: string): string {
     case 'object': return 'a mapping';
     default: return expected;
   }
-}
-
-export function valueAt(root: unknown, path: readonly PropertyKey[]): unknown {
-  let v: unknown = root;
-  for (const key of path) {
-    if (v === null || typeof v !== 'object') return undefined;
-    v = (v as Record<PropertyKey, unknown>)[key];
-  }
-  return v;
 }

@@ -195,8 +195,7 @@ function reduceToSchur(nn: number, e: Float64Array, d: Float64Array, V: Float64A
   let p = 0;
   let q = 0;
   let iter = 0;
-  let i: number, j: number, k: number, l: number, m: number, t: number, w: number, x: number, y: number;
-  let ra: number, sa: number, vr: number, vi: number;
+  let i: number, j: number, k: number, l: number, m: number, w: number, x: number, y: number;
   let notlast: boolean;
   let r = 0;
   let s = 0;
@@ -428,9 +427,7 @@ function substituteReal(nn: number, n: number, p: number, e: Float64Array, d: Fl
   const N = nn;
   const eps = Number.EPSILON;
   let q = 0;
-  let i: number, j: number, k: number, l: number, m: number, t: number, w: number, x: number, y: number;
-  let ra: number, sa: number, vr: number, vi: number;
-  let notlast: boolean;
+  let i: number, j: number, l: number, t: number, w: number, x: number, y: number;
   let r = 0;
   let s = 0;
   let z = 0;
@@ -473,9 +470,8 @@ function substituteReal(nn: number, n: number, p: number, e: Float64Array, d: Fl
 function substituteComplex(nn: number, n: number, p: number, q: number, e: Float64Array, d: Float64Array, H: Float64Array, norm: number): void {
   const N = nn;
   const eps = Number.EPSILON;
-  let i: number, j: number, k: number, l: number, m: number, t: number, w: number, x: number, y: number;
+  let i: number, j: number, l: number, t: number, w: number, x: number, y: number;
   let ra: number, sa: number, vr: number, vi: number;
-  let notlast: boolean;
   let r = 0;
   let s = 0;
   let z = 0;

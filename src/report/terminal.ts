@@ -4,6 +4,7 @@
  * and never carries meaning alone.
  */
 import type { ConditionResult, Finding, Results, Verdict } from '../types.js';
+import { hasIssue } from './condition-status.js';
 import { formatEigenvalues, formatSig } from './format-number.js';
 import { textTable } from './text-table.js';
 
@@ -91,7 +92,7 @@ export function formatResultsText(results: Results, options: TerminalOptions): s
 function showCondition(c: ConditionResult, detail: TerminalOptions['detail']): boolean {
   if (detail === 'all') return true;
   if (detail === 'none') return false;
-  return c.findings.length === 0 || c.findings.some((f) => f.verdict !== 'pass');
+  return hasIssue(c);
 }
 
 function conditionHeading(c: ConditionResult): string {

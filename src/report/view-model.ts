@@ -3,6 +3,7 @@
  * each number is printed. Pure: no files, no clock (the date is the run's own generatedAt).
  */
 import type { Comparison } from '../compare/compare-results.js';
+import { countVerdicts } from '../results.js';
 import type {
   ConditionResult, DynamicsForm, Finding, Mode, ResolvedCriteriaSet, Results, VerdictCounts,
 } from '../types.js';
@@ -54,12 +55,6 @@ const REQUIRED_FROM: Record<'model' | 'criteria default' | 'none', string> = {
 
 function tallyOf(counts: VerdictCounts): VerdictTally[] {
   return VERDICT_ORDER.map((v) => ({ mark: verdictMark(v), count: counts[v] }));
-}
-
-function countVerdicts(findings: readonly Finding[]): VerdictCounts {
-  const counts: VerdictCounts = { pass: 0, marginal: 0, fail: 0, not_evaluated: 0 };
-  for (const f of findings) counts[f.verdict] += 1;
-  return counts;
 }
 
 function modeRow(mode: Mode): ModeRow {

@@ -19,9 +19,16 @@ export type Chunks = Iterable<string>;
 
 const BLOCK = 1 << 20;
 
+/**
+ * A fresh hidden name beside `path` for the file that is renamed over it: the same directory,
+ * so that the rename stays on one file system and is atomic.
+ */
+export function tempPathBeside(path: string): string {
+  return join(dirname(path), `.${basename(path)}.${process.pid}.${randomBytes(4).toString('hex')}.tmp`);
+}
+
 export async function writeFileAtomic(path: string, data: string | Buffer | Chunks): Promise<void> {
-  // Same directory, so that the rename stays on one file system and is atomic.
-  const temp = join(dirname(path), `.${basename(path)}.${process.pid}.${randomBytes(4).toString('hex')}.tmp`);
+  const temp = tempPathBeside(path);
   let handle: Awaited<ReturnType<typeof open>> | undefined;
   let inFlight: Promise<unknown> = Promise.resolve();
   try {
