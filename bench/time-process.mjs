@@ -83,6 +83,34 @@ export function timeRuns(command, args, options = {}) {
   const runs = options.runs ?? 5;
   const results = [];
   for (let i = 0; i < runs; i++) results.push(runOnce(command, args, options));
+  return summarise(results);
+}
+
+/**
+ * Time several commands `runs` times each, taking turns (A B C A B C ...), so that a slow spell
+ * of the machine falls on all of them alike and their ratio stays fair. Each job is
+ * { command, args, options }; returns one summary per job, in order, or null for a job whose
+ * run broke (`onError(job index, error)` is told, and the job is not run again).
+ */
+export function timeInTurns(jobs, runs, onError = () => undefined) {
+  const results = jobs.map(() => []);
+  const broken = jobs.map(() => false);
+  for (let i = 0; i < runs; i++) {
+    jobs.forEach((job, k) => {
+      if (broken[k]) return;
+      try {
+        results[k].push(runOnce(job.command, job.args, job.options));
+      } catch (err) {
+        broken[k] = true;
+        onError(k, err);
+      }
+    });
+  }
+  return results.map((r, k) => (broken[k] ? null : summarise(r)));
+}
+
+function summarise(results) {
+  const runs = results.length;
   const times = results.map((r) => r.seconds).sort((a, b) => a - b);
   const mid = Math.floor(times.length / 2);
   const median = times.length % 2 === 1 ? times[mid] : (times[mid - 1] + times[mid]) / 2;

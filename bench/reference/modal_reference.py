@@ -2,17 +2,29 @@
 """Timing reference for the sweep benchmark, in Python 3 with numpy.
 
 This is a timing reference, not a second implementation of the criteria: it does roughly the
-work of `modalgate check model.json --json out.json` on the sweep file (read the JSON model,
-eigen-analysis of every condition, modal figures, a handful of boundary checks for one aircraft
+work of `modalgate check model.json --json out.json` on the sweep file (read the JSON model and
+hash it, eigen-analysis of every condition, modal figures, the boundary checks for one aircraft
 class, write a JSON file) the way a careful hand script would, with numpy doing the eigen work
 batched over a stacked (N, 8, 8) array. Its numbers are not meant to agree with modalgate's
 findings digit for digit, and modalgate never reads its output.
 
-    python3 bench/reference/modal_reference.py model.json out.json
+By default it writes every field the results contract (modalgate-results/1) names: per condition id,
+phase, category, required level and warnings; per mode the eigenvalues, natural frequency,
+damping ratio, time constant, times to half and double, period and a basis text; per finding
+the criterion, mode, quantity, value, level, verdict, margin, bounds, source and reason. It
+does not write what modalgate adds beyond the contract (mode shapes, titles, the n/alpha
+method, criteria not applicable, cycles to half), so modalgate still writes more than it.
+
+    python3 bench/reference/modal_reference.py [--lean] model.json out.json
+
+--lean writes only the figures and verdicts (no basis texts, criterion ids, bounds, sources,
+reasons, categories, warnings or input hash), as this reference did at first; the bench times
+it too, for information, beside the full one the target is set against.
 
 Only state-space conditions with the eight states u, w, q, theta, v, p, r, phi (any order) are
 analysed; any other condition is listed as skipped. Units are SI; no US unit conversion here.
 """
+import hashlib
 import json
 import math
 import sys
@@ -67,10 +79,45 @@ BOUNDS = {
 }
 MARGINAL = 0.10  # fraction of the boundary (modalgate's default band)
 
+# Criterion id (the {cat} part is the category, lower case) and paragraph, by (mode, quantity).
+CRITERIA = {
+    ("short_period", "damping_ratio"): ("short-period-damping-cat-{cat}", "MIL-F-8785C 3.2.2.1.2"),
+    ("short_period", "cap"): ("short-period-cap-cat-{cat}", "MIL-F-8785C 3.2.2.1.1"),
+    ("phugoid", "damping_ratio"): ("phugoid-damping", "MIL-F-8785C 3.2.1.2"),
+    ("dutch_roll", "damping_ratio"): ("dutch-roll-damping-cat-{cat}", "MIL-F-8785C 3.3.1.1"),
+    ("dutch_roll", "damping_frequency_product"): ("dutch-roll-damping-frequency-cat-{cat}", "MIL-F-8785C 3.3.1.1"),
+    ("dutch_roll", "natural_frequency"): ("dutch-roll-frequency-cat-{cat}", "MIL-F-8785C 3.3.1.1"),
+    ("roll", "time_constant"): ("roll-time-constant-cat-{cat}", "MIL-F-8785C 3.3.1.2"),
+    ("spiral", "time_to_double"): ("spiral-time-to-double", "MIL-F-8785C 3.3.1.3"),
+}
+
+
+def bounds_json(levels):
+    """{"1": {"min": .., "max": ..}, ...}, as the results contract writes bounds."""
+    out = {}
+    for i, (lo, hi) in enumerate(levels):
+        b = {}
+        if lo is not None:
+            b["min"] = lo
+        if hi is not None:
+            b["max"] = hi
+        out[str(i + 1)] = b
+    return out
+
+
+# Worked out once: criterion id, bounds as written, source, by (mode, quantity, category).
+CRITERION_TEXT = {
+    (kind, quantity, category): (criterion.format(cat=category.lower()), bounds_json(levels), source)
+    for (kind, quantity), (criterion, source) in CRITERIA.items()
+    for category, levels in BOUNDS[(kind, quantity)].items()
+}
+
 
 def load(path):
-    with open(path, "r", encoding="utf-8") as f:
-        model = json.load(f)
+    with open(path, "rb") as f:
+        raw = f.read()
+    sha256 = hashlib.sha256(raw).hexdigest()
+    model = json.loads(raw)
     rows, kept, skipped = [], [], []
     for c in model["conditions"]:
         ss = c.get("stateSpace")
@@ -81,7 +128,7 @@ def load(path):
         a = np.asarray(ss["A"], dtype=float)[np.ix_(order, order)]
         rows.append(a)
         kept.append(c)
-    return model, np.stack(rows) if rows else np.zeros((0, 8, 8)), kept, skipped
+    return model, sha256, np.stack(rows) if rows else np.zeros((0, 8, 8)), kept, skipped
 
 
 def analyse(a):
@@ -91,49 +138,64 @@ def analyse(a):
     participation = np.abs(np.transpose(left, (0, 2, 1)) * right)  # (N, state, mode)
     participation /= participation.sum(axis=1, keepdims=True)
     long_share = participation[:, LONGITUDINAL, :].sum(axis=1)  # (N, mode)
-    return values, long_share
+    return values, participation, long_share
 
 
 def figures(lam):
     re, im = lam.real, abs(lam.imag)
     wn = abs(lam)
     out = {
-        "eigenvalues": [{"re": re, "im": im}] if im > 0 else [{"re": re, "im": 0.0}],
+        "eigenvalues": [{"re": re, "im": im}, {"re": re, "im": -im}] if im > 0 else [{"re": re, "im": 0.0}],
         "naturalFrequency": wn,
         "dampingRatio": (-re / wn) if wn > 0 and im > 0 else None,
         "timeConstant": (-1.0 / re) if im == 0 and re != 0 else None,
         "timeToHalf": (LN2 / -re) if re < 0 else None,
         "timeToDouble": (LN2 / re) if re > 0 else None,
+        "period": (2.0 * math.pi / im) if im > 0 else None,
     }
     if im == 0:
         out["naturalFrequency"] = None
     return out
 
 
+def basis(lam, share, column):
+    """Why the mode got its name, in words: the root, the block's share, the two largest states."""
+    top = sorted(range(len(STATES)), key=lambda i: -column[i])[:2]
+    dominant = ", ".join(f"{STATES[i]} {100 * column[i]:.0f} %" for i in top)
+    block = "longitudinal" if share > 0.5 else "lateral-directional"
+    held = share if share > 0.5 else 1 - share
+    if abs(lam.imag) > 1e-9:
+        root = f"oscillatory pair {lam.real:.3g} +/- {abs(lam.imag):.3g}i ({abs(lam):.3g} rad/s)"
+    else:
+        root = f"real root {lam.real:.3g}"
+    return f"{root}; {100 * held:.0f} % {block} participation; dominant {dominant}"
+
+
 def identify(values, long_share):
-    """Name the modes of one condition: by block (participation), then by frequency."""
+    """Name the modes of one condition: by block (participation), then by frequency.
+    Returns (kind, eigenvalue, index of the mode's column)."""
     modes = []
     tol = 1e-9
     for block, is_long in (("long", True), ("lat", False)):
-        sel = [(lam, s) for lam, s in zip(values, long_share) if (s > 0.5) == is_long]
-        pairs = sorted([lam for lam, _ in sel if lam.imag > tol], key=abs)
-        reals = sorted([lam for lam, _ in sel if abs(lam.imag) <= tol], key=abs)
+        sel = [(lam, j) for j, (lam, s) in enumerate(zip(values, long_share)) if (s > 0.5) == is_long]
+        pairs = sorted([(lam, j) for lam, j in sel if lam.imag > tol], key=lambda x: abs(x[0]))
+        reals = sorted([(lam, j) for lam, j in sel if abs(lam.imag) <= tol], key=lambda x: abs(x[0]))
         if is_long:
             if len(pairs) == 2:
-                modes.append(("phugoid", pairs[0]))
-                modes.append(("short_period", pairs[1]))
+                modes.append(("phugoid", *pairs[0]))
+                modes.append(("short_period", *pairs[1]))
             else:
-                modes.extend(("other", lam) for lam in pairs + reals)
+                modes.extend(("other", lam, j) for lam, j in pairs + reals)
         else:
             if pairs:
-                modes.append(("dutch_roll", pairs[-1]))
-                modes.extend(("other", lam) for lam in pairs[:-1])
+                modes.append(("dutch_roll", *pairs[-1]))
+                modes.extend(("other", lam, j) for lam, j in pairs[:-1])
             if len(reals) >= 2:
-                modes.append(("spiral", reals[0]))
-                modes.append(("roll", reals[-1]))
-                modes.extend(("other", lam) for lam in reals[1:-1])
+                modes.append(("spiral", *reals[0]))
+                modes.append(("roll", *reals[-1]))
+                modes.extend(("other", lam, j) for lam, j in reals[1:-1])
             else:
-                modes.extend(("other", lam) for lam in reals)
+                modes.extend(("other", lam, j) for lam, j in reals)
     return modes
 
 
@@ -144,21 +206,42 @@ def level_of(value, levels):
     return None
 
 
-def check(kind, quantity, value, category, required=1):
-    levels = BOUNDS[(kind, quantity)][category]
-    if value is None:
-        return {"verdict": "not_evaluated", "level": None, "margin": None}
+def judge(value, levels, required):
+    """(level reached, verdict against the required level, margin to its nearer bound)."""
     level = level_of(value, levels)
     lo, hi = levels[required - 1]
     margins = [m for m in ((value - lo) if lo is not None else None, (hi - value) if hi is not None else None) if m is not None]
     margin = min(margins) if margins else None
     if level is None or level > required:
-        verdict = "fail"
-    else:
-        edge = lo if lo is not None and (hi is None or value - lo <= hi - value) else hi
-        band = MARGINAL * abs(edge) if edge not in (None, 0) else 0.01
-        verdict = "marginal" if margin is not None and margin < band else "pass"
-    return {"verdict": verdict, "level": level, "margin": margin}
+        return level, "fail", margin
+    edge = lo if lo is not None and (hi is None or value - lo <= hi - value) else hi
+    band = MARGINAL * abs(edge) if edge not in (None, 0) else 0.01
+    return level, ("marginal" if margin is not None and margin < band else "pass"), margin
+
+
+def check(kind, quantity, value, category, required=1):
+    if LEAN:
+        return check_lean(kind, quantity, value, category, required)
+    levels = BOUNDS[(kind, quantity)][category]
+    criterion, bounds, source = CRITERION_TEXT[(kind, quantity, category)]
+    common = {"criterion": criterion, "mode": kind, "quantity": quantity, "value": value}
+    tail = {"bounds": bounds, "source": source}
+    if value is None:
+        return {**common, "level": None, "verdict": "not_evaluated", "margin": None, **tail,
+                "reason": f"the {kind.replace('_', ' ')} has no {quantity.replace('_', ' ')}"}
+    level, verdict, margin = judge(value, levels, required)
+    reached = f"Level {level} reached" if level is not None else "no level reached"
+    return {**common, "level": level, "verdict": verdict, "margin": margin, **tail,
+            "reason": f"{reached} (Level {required} required)"}
+
+
+def check_lean(kind, quantity, value, category, required=1):
+    """Figures and verdicts only (--lean)."""
+    levels = BOUNDS[(kind, quantity)][category]
+    if value is None:
+        return {"mode": kind, "quantity": quantity, "value": value, "verdict": "not_evaluated", "level": None, "margin": None}
+    level, verdict, margin = judge(value, levels, required)
+    return {"mode": kind, "quantity": quantity, "value": value, "verdict": verdict, "level": level, "margin": margin}
 
 
 def evaluate(condition, modes):
@@ -169,8 +252,7 @@ def evaluate(condition, modes):
     def add(kind, quantity, value):
         if category is None:
             return
-        r = check(kind, quantity, value, category)
-        findings.append({"mode": kind, "quantity": quantity, "value": value, **r})
+        findings.append(check(kind, quantity, value, category))
 
     sp = by_kind.get("short_period")
     if sp:
@@ -190,40 +272,65 @@ def evaluate(condition, modes):
         t2 = spiral["timeToDouble"]
         # A convergent spiral never doubles: it meets every level. JSON has no infinity, so
         # the finding carries null as its value, as modalgate's results writer does.
-        if t2 is None:
-            findings.append({"mode": "spiral", "quantity": "time_to_double", "value": None, "verdict": "pass", "level": 1, "margin": None})
+        if t2 is None and category is not None:
+            f = check("spiral", "time_to_double", 1e300, category)
+            f.update({"value": None, "margin": None})
+            if not LEAN:
+                f["reason"] = "convergent spiral: never doubles"
+            findings.append(f)
         else:
             add("spiral", "time_to_double", t2)
     return findings
 
 
+LEAN = False
+
+
 def main(argv):
+    global LEAN
+    if len(argv) == 4 and argv[1] == "--lean":
+        LEAN = True
+        argv = [argv[0], *argv[2:]]
     if len(argv) != 3:
-        print("usage: modal_reference.py MODEL.json OUT.json", file=sys.stderr)
+        print("usage: modal_reference.py [--lean] MODEL.json OUT.json", file=sys.stderr)
         return 2
-    model, a, kept, skipped = load(argv[1])
-    values, long_share = analyse(a)
+    model, sha256, a, kept, skipped = load(argv[1])
+    values, participation, long_share = analyse(a)
     # n/alpha = -V Z_w / g [g/rad], from the w row of A (column 1 of the canonical order).
     n_alpha = -np.array([c["airspeed"] for c in kept]) * a[:, 1, 1] / G if len(kept) else np.zeros(0)
 
     conditions = []
     summary = {"pass": 0, "marginal": 0, "fail": 0, "not_evaluated": 0}
     for k, c in enumerate(kept):
-        named = identify(values[k].tolist(), long_share[k].tolist())
-        modes = [(kind, figures(lam)) for kind, lam in named]
+        shares = long_share[k].tolist()
+        columns = None if LEAN else participation[k].T.tolist()  # (mode, state)
+        named = identify(values[k].tolist(), shares)
+        if LEAN:
+            modes = [(kind, figures(lam)) for kind, lam, _ in named]
+        else:
+            modes = [(kind, {**figures(lam), "basis": basis(lam, shares[j], columns[j])}) for kind, lam, j in named]
         c["_nAlpha"] = float(n_alpha[k])
         findings = evaluate(c, modes)
         for f in findings:
             summary[f["verdict"]] += 1
+        if LEAN:
+            conditions.append({"id": c["id"], "phase": c["phase"], "modes": [{"kind": kind, **f} for kind, f in modes], "findings": findings})
+            continue
+        category = CATEGORY.get(c["phase"])
         conditions.append({
             "id": c["id"],
             "phase": c["phase"],
+            "category": category,
+            "requiredLevel": 1,
             "modes": [{"kind": kind, **f} for kind, f in modes],
             "findings": findings,
+            "warnings": [] if category else [f"phase {c['phase']} has no category here"],
         })
     out = {
-        "format": "modalgate-reference/1",
+        "format": "modalgate-reference/1" + ("-lean" if LEAN else ""),
         "note": "timing reference only, not a second implementation of the criteria",
+        "tool": {"name": "modal_reference.py", "numpy": np.__version__},
+        "inputs": [{"role": "model", "path": argv[1], "sha256": sha256}],
         "aircraft": model["aircraft"],
         "summary": summary,
         "skipped": skipped,
