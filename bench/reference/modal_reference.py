@@ -42,7 +42,8 @@ CATEGORY = {"CR": "B", "CL": "B", "PA": "C"}
 # Boundaries for Class II-L by category: per level (min, max), None = no bound.
 # Sources: MIL-F-8785C 3.2.2.1.2 (short-period damping, from memory), 3.2.2.1.1 (CAP, from
 # memory), 3.2.1.2 (phugoid, from memory), 3.3.1.1 (Dutch roll), 3.3.1.2 (roll-mode time
-# constant), 3.3.1.3 (spiral time to double).
+# constant), 3.3.1.3 (spiral time to double). The short-period frequency minimum is the
+# Category C one for Classes II-L and III.
 BOUNDS = {
     ("short_period", "damping_ratio"): {
         "B": [(0.30, 2.00), (0.20, 2.00), (0.15, None)],
@@ -52,9 +53,16 @@ BOUNDS = {
         "B": [(0.085, 3.6), (0.038, 10.0), (None, None)],
         "C": [(0.16, 3.6), (0.096, 10.0), (None, None)],
     },
+    ("short_period", "natural_frequency"): {  # Category C only, Classes II-L and III
+        "C": [(0.7, None), (0.4, None), (None, None)],
+    },
     ("phugoid", "damping_ratio"): {
         "B": [(0.04, None), (0.0, None), (None, None)],
         "C": [(0.04, None), (0.0, None), (None, None)],
+    },
+    ("phugoid", "time_to_double"): {  # stated for Level 3; a damped phugoid meets it
+        "B": [(55.0, None), (55.0, None), (55.0, None)],
+        "C": [(55.0, None), (55.0, None), (55.0, None)],
     },
     ("dutch_roll", "damping_ratio"): {
         "B": [(0.08, None), (0.02, None), (0.0, None)],
@@ -83,7 +91,9 @@ MARGINAL = 0.10  # fraction of the boundary (modalgate's default band)
 CRITERIA = {
     ("short_period", "damping_ratio"): ("short-period-damping-cat-{cat}", "MIL-F-8785C 3.2.2.1.2"),
     ("short_period", "cap"): ("short-period-cap-cat-{cat}", "MIL-F-8785C 3.2.2.1.1"),
+    ("short_period", "natural_frequency"): ("short-period-frequency-cat-{cat}-heavy", "MIL-F-8785C 3.2.2.1.1"),
     ("phugoid", "damping_ratio"): ("phugoid-damping", "MIL-F-8785C 3.2.1.2"),
+    ("phugoid", "time_to_double"): ("phugoid-time-to-double", "MIL-F-8785C 3.2.1.2"),
     ("dutch_roll", "damping_ratio"): ("dutch-roll-damping-cat-{cat}", "MIL-F-8785C 3.3.1.1"),
     ("dutch_roll", "damping_frequency_product"): ("dutch-roll-damping-frequency-cat-{cat}", "MIL-F-8785C 3.3.1.1"),
     ("dutch_roll", "natural_frequency"): ("dutch-roll-frequency-cat-{cat}", "MIL-F-8785C 3.3.1.1"),
@@ -254,13 +264,29 @@ def evaluate(condition, modes):
             return
         findings.append(check(kind, quantity, value, category))
 
+    def add_time_to_double(kind, t2):
+        # A convergent mode never doubles: it meets every level. JSON has no infinity, so the
+        # finding carries null as its value, as modalgate's results writer does.
+        if t2 is None and category is not None:
+            f = check(kind, "time_to_double", 1e300, category)
+            f.update({"value": None, "margin": None})
+            if not LEAN:
+                f["reason"] = f"convergent {kind}: never doubles"
+            findings.append(f)
+        else:
+            add(kind, "time_to_double", t2)
+
     sp = by_kind.get("short_period")
     if sp:
         add("short_period", "damping_ratio", sp["dampingRatio"])
         n_alpha = condition["_nAlpha"]
         add("short_period", "cap", sp["naturalFrequency"] ** 2 / n_alpha if n_alpha > 0 else None)
+        if category == "C":
+            add("short_period", "natural_frequency", sp["naturalFrequency"])
     ph = by_kind.get("phugoid")
     add("phugoid", "damping_ratio", ph["dampingRatio"] if ph else None)
+    if ph:
+        add_time_to_double("phugoid", ph["timeToDouble"])
     dr = by_kind.get("dutch_roll")
     add("dutch_roll", "damping_ratio", dr["dampingRatio"] if dr else None)
     add("dutch_roll", "damping_frequency_product", dr["dampingRatio"] * dr["naturalFrequency"] if dr else None)
@@ -269,17 +295,7 @@ def evaluate(condition, modes):
     add("roll", "time_constant", roll["timeConstant"] if roll else None)
     spiral = by_kind.get("spiral")
     if spiral:
-        t2 = spiral["timeToDouble"]
-        # A convergent spiral never doubles: it meets every level. JSON has no infinity, so
-        # the finding carries null as its value, as modalgate's results writer does.
-        if t2 is None and category is not None:
-            f = check("spiral", "time_to_double", 1e300, category)
-            f.update({"value": None, "margin": None})
-            if not LEAN:
-                f["reason"] = "convergent spiral: never doubles"
-            findings.append(f)
-        else:
-            add("spiral", "time_to_double", t2)
+        add_time_to_double("spiral", spiral["timeToDouble"])
     return findings
 
 
