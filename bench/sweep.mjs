@@ -12,7 +12,7 @@
  * --strict exits 1 when a target is missed (the default only reports it).
  */
 import { spawnSync } from 'node:child_process';
-import { existsSync, mkdtempSync, rmSync, statSync } from 'node:fs';
+import { existsSync, mkdtempSync, readFileSync, rmSync, statSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -57,6 +57,19 @@ function choosePython() {
     }
   }
   return null;
+}
+
+/** Whether the reference reached the verdicts modalgate did: a check that it did the same work. */
+function sameSummary(modalgateFile, referenceFile) {
+  const counts = (file) => {
+    const { summary } = JSON.parse(readFileSync(file, 'utf8'));
+    return ['pass', 'marginal', 'fail', 'not_evaluated'].map((k) => `${summary[k]} ${k.replace('_', ' ')}`).join(', ');
+  };
+  const ours = counts(modalgateFile);
+  const theirs = counts(referenceFile);
+  return ours === theirs
+    ? `(same verdict counts as modalgate: ${ours})`
+    : `(verdict counts DIFFER: modalgate ${ours}; reference ${theirs}: the reference is not doing the same checks)`;
 }
 
 function line(label, value, target) {
@@ -151,6 +164,7 @@ function main() {
       if (jsonRun && leanRun) {
         console.log(line('ratio modalgate --json / lean', (jsonRun.median / leanRun.median).toFixed(2), '(for information: the lean reference writes far less)'));
       }
+      if (jsonRun && refRun && existsSync(jsonOut)) console.log(`  ${''.padEnd(34)} ${sameSummary(jsonOut, join(dir, 'reference.json'))}`);
     }
 
     if (built) {
