@@ -17,8 +17,10 @@ import { outputError } from './output-error.js';
 import { compactOpening, conditionJson, summaryText, type ResultsHead } from './json.js';
 import { tempPathBeside } from './write-atomic.js';
 
-/** [characters] text gathered before each write */
-const BLOCK = 1 << 20;
+/** [bytes] the buffer each condition's line is encoded into, written out when full */
+const BUFFER_BYTES = 1 << 22;
+/** [bytes] most bytes one UTF-16 code unit can take in UTF-8 */
+const MAX_UTF8_PER_UNIT = 3;
 
 export class ResultsJsonFile {
   readonly path: string;
@@ -26,20 +28,29 @@ export class ResultsJsonFile {
   #fd: number | undefined;
   /** [bytes] where the summary starts */
   #summaryAt: number;
+  /** [bytes] where the next write goes in the file */
   #position = 0;
-  #pending: string[] = [];
-  #pendingSize = 0;
+  /**
+   * Lines are encoded straight into this buffer, which is written out when the next line may
+   * not fit: no joined block strings and no fresh buffer per block, so the lines die young.
+   */
+  #buffer: Buffer;
+  #used = 0;
   #count = 0;
 
-  private constructor(path: string, temp: string, fd: number, summaryAt: number) {
+  private constructor(path: string, temp: string, fd: number, summaryAt: number, bufferBytes: number) {
     this.path = path;
+    this.#buffer = Buffer.allocUnsafe(bufferBytes);
     this.#temp = temp;
     this.#fd = fd;
     this.#summaryAt = summaryAt;
   }
 
-  /** Start the file: its head, with a summary of zeros to be replaced by `finish`. */
-  static open(path: string, head: ResultsHead): ResultsJsonFile {
+  /**
+   * Start the file: its head, with a summary of zeros to be replaced by `finish`.
+   * `bufferBytes` (tests only) sets the size of the encoding buffer.
+   */
+  static open(path: string, head: ResultsHead, bufferBytes: number = BUFFER_BYTES): ResultsJsonFile {
     const temp = tempPathBeside(path);
     let fd: number;
     try {
@@ -48,7 +59,7 @@ export class ResultsJsonFile {
       throw outputError(path, err);
     }
     const { before, after } = compactOpening(head);
-    const file = new ResultsJsonFile(path, temp, fd, Buffer.byteLength(before));
+    const file = new ResultsJsonFile(path, temp, fd, Buffer.byteLength(before), bufferBytes);
     try {
       file.#write(`${before}${summaryText({ pass: 0, marginal: 0, fail: 0, not_evaluated: 0 })}${after}\n`);
     } catch (err) {
@@ -61,19 +72,16 @@ export class ResultsJsonFile {
   /** The next condition's line. */
   add(condition: ConditionResult): void {
     if (this.#fd === undefined) throw new InternalError('results file already finished or abandoned');
-    if (this.#count > 0) this.#pending.push(',\n');
     const line = conditionJson(condition);
-    this.#pending.push(line);
-    this.#pendingSize += line.length;
-    this.#count += 1;
-    if (this.#pendingSize >= BLOCK) {
-      try {
-        this.#flush();
-      } catch (err) {
-        this.abort();
-        throw outputError(this.path, err);
-      }
+    try {
+      // the separator on its own: joined to the line, it would make a copy of the line
+      if (this.#count > 0) this.#append(',\n');
+      this.#append(line);
+    } catch (err) {
+      this.abort();
+      throw outputError(this.path, err);
     }
+    this.#count += 1;
   }
 
   /** Write the rest and the summary, then put the file in place of the target. */
@@ -81,7 +89,7 @@ export class ResultsJsonFile {
     const fd = this.#fd;
     if (fd === undefined) throw new InternalError('results file already finished or abandoned');
     try {
-      this.#pending.push('\n]}\n');
+      this.#append('\n]}\n');
       this.#flush();
       writeSync(fd, summaryText(summary), this.#summaryAt);
       closeSync(fd);
@@ -106,15 +114,30 @@ export class ResultsJsonFile {
     rmSync(this.#temp, { force: true });
   }
 
+  /** Encode `text` after what the buffer holds; write the buffer out first if it may not fit. */
+  #append(text: string): void {
+    const room = this.#buffer.length - this.#used;
+    if (text.length * MAX_UTF8_PER_UNIT > room) {
+      this.#flush();
+      if (text.length * MAX_UTF8_PER_UNIT > this.#buffer.length) {
+        this.#writeBytes(Buffer.from(text));
+        return;
+      }
+    }
+    this.#used += this.#buffer.write(text, this.#used);
+  }
+
   #flush(): void {
-    if (this.#pending.length === 0) return;
-    this.#write(this.#pending.join(''));
-    this.#pending = [];
-    this.#pendingSize = 0;
+    if (this.#used === 0) return;
+    this.#writeBytes(this.#buffer.subarray(0, this.#used));
+    this.#used = 0;
   }
 
   #write(text: string): void {
-    const bytes = Buffer.from(text);
+    this.#writeBytes(Buffer.from(text));
+  }
+
+  #writeBytes(bytes: Uint8Array): void {
     let done = 0;
     while (done < bytes.length) done += writeSync(this.#fd!, bytes, done, bytes.length - done, this.#position + done);
     this.#position += bytes.length;

@@ -9,7 +9,7 @@ import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { runCheck } from '../../src/check.js';
-import { INDENT_UP_TO_CONDITIONS, renderResultsJson, type ResultsHead } from '../../src/report/json.js';
+import { conditionJson, INDENT_UP_TO_CONDITIONS, renderResultsJson, type ResultsHead } from '../../src/report/json.js';
 import { ResultsJsonFile } from '../../src/report/results-json-file.js';
 import type { CheckOutcome } from '../../src/check.js';
 
@@ -31,6 +31,11 @@ function headOf(o: CheckOutcome): ResultsHead {
   return head;
 }
 
+/** [characters] the longest condition line, to size a buffer that holds only a few */
+function conditionJsonLength(results: CheckOutcome['results']): number {
+  return Math.max(...results.conditions.map((c) => conditionJson(c).length));
+}
+
 const leftovers = () => readdirSync(dir).filter((name) => name.endsWith('.tmp'));
 
 describe('ResultsJsonFile', () => {
@@ -42,6 +47,22 @@ describe('ResultsJsonFile', () => {
     file.finish(outcome.results.summary);
     expect(readFileSync(path, 'utf8')).toBe(renderResultsJson(outcome.results));
     expect(JSON.parse(readFileSync(path, 'utf8')).summary).toEqual(outcome.results.summary);
+    expect(leftovers()).toEqual([]);
+  });
+
+  it('writes the same bytes whatever the buffer size, lines longer than the buffer and non-ASCII text included', () => {
+    // ids in 2-, 3- and 4-byte UTF-8, so that a line's byte length is well above its length
+    const conditions = outcome.results.conditions.map((c, i) => (i % 2 === 1 ? { ...c, id: `${c.id}-${'Ünï—✓-𝛼'.repeat(200)}` } : c));
+    const results = { ...outcome.results, conditions };
+    const expected = renderResultsJson(results);
+    const lineLength = conditionJsonLength(results);
+    for (const bufferBytes of [4096, 3 * lineLength, 1 << 16, 1 << 22]) {
+      const path = join(dir, `buffer-${bufferBytes}.json`);
+      const file = ResultsJsonFile.open(path, headOf(outcome), bufferBytes);
+      for (const c of conditions) file.add(c);
+      file.finish(results.summary);
+      expect(readFileSync(path, 'utf8'), `buffer of ${bufferBytes} bytes`).toBe(expected);
+    }
     expect(leftovers()).toEqual([]);
   });
 
