@@ -1,7 +1,8 @@
 /**
  * A large sweep's results file, written as the conditions are checked instead of from the
- * finished results: each condition's line goes to a temporary file beside the target at once,
- * so the run need not keep every condition's text and result until the end. The summary,
+ * finished results: each condition's line is encoded into a buffer at once, and the buffer is
+ * written to a temporary file beside the target whenever it is full, so the run need not keep
+ * every condition's text and result until the end. The summary,
  * known only at the end, goes into the place left for it (fixed width, see json.ts); then the
  * file is renamed over the target. Until then the target is untouched, and `abort` removes the
  * temporary file, so a failed run leaves the last good results as they were.
@@ -61,7 +62,7 @@ export class ResultsJsonFile {
     const { before, after } = compactOpening(head);
     const file = new ResultsJsonFile(path, temp, fd, Buffer.byteLength(before), bufferBytes);
     try {
-      file.#write(`${before}${summaryText({ pass: 0, marginal: 0, fail: 0, not_evaluated: 0 })}${after}\n`);
+      file.#append(`${before}${summaryText({ pass: 0, marginal: 0, fail: 0, not_evaluated: 0 })}${after}\n`);
     } catch (err) {
       file.abort();
       throw outputError(path, err);
@@ -131,10 +132,6 @@ export class ResultsJsonFile {
     if (this.#used === 0) return;
     this.#writeBytes(this.#buffer.subarray(0, this.#used));
     this.#used = 0;
-  }
-
-  #write(text: string): void {
-    this.#writeBytes(Buffer.from(text));
   }
 
   #writeBytes(bytes: Uint8Array): void {
