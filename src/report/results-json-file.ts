@@ -2,9 +2,9 @@
  * A large sweep's results file, written as the conditions are checked instead of from the
  * finished results: each condition's line is encoded into a buffer at once, and the buffer is
  * written to a temporary file beside the target whenever it is full, so the run need not keep
- * every condition's text and result until the end. The summary,
- * known only at the end, goes into the place left for it (fixed width, see json.ts); then the
- * file is renamed over the target. Until then the target is untouched, and `abort` removes the
+ * every condition's text and result until the end. The summary, known only at the end, goes
+ * into the place left for it (fixed width, see json.ts); then the file is renamed over the
+ * target. Until then the target is untouched, and `abort` removes the
  * temporary file, so a failed run leaves the last good results as they were.
  *
  * The bytes are those of resultsJsonChunks for the same results (test/report/results-json-file.test.ts).
