@@ -4,8 +4,8 @@
  * written to a temporary file beside the target whenever it is full, so the run need not keep
  * every condition's text and result until the end. The summary, known only at the end, goes
  * into the place left for it (fixed width, see json.ts); then the file is renamed over the
- * target. Until then the target is untouched, and `abort` removes the
- * temporary file, so a failed run leaves the last good results as they were.
+ * target. Until then the target is untouched, and `abort` removes the temporary file, so a
+ * failed run leaves the last good results as they were.
  *
  * The bytes are those of resultsJsonChunks for the same results (test/report/results-json-file.test.ts).
  * Measured on the 10,000-condition bench sweep: about 0.3 s and 100 MB less than keeping
