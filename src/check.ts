@@ -8,7 +8,7 @@ import { loadCriteriaSet } from './load/criteria-file.js';
 import { loadModel } from './load/load-model.js';
 import { assembleResults, resultsHead } from './results.js';
 import { checkAllConditions } from './sweep/check-all.js';
-import type { AircraftModel, ConditionResult, InputFile, ResolvedCriteriaSet, Results } from './types.js';
+import type { AircraftModel, ConditionResult, InputFile, ResolvedCriteriaSet, Results, ResultsHead } from './types.js';
 
 export interface CheckRequest {
   /** path of the model file */
@@ -28,7 +28,7 @@ export interface CheckRequest {
    * the results as they will be but for `summary` and `conditions`, and the number of
    * conditions (e.g. to start writing the results file).
    */
-  onStart?: (head: Omit<Results, 'summary' | 'conditions'>, total: number) => void;
+  onStart?: (head: ResultsHead, total: number) => void;
   /**
    * Called with each condition's result as soon as it is checked, in the order of the model
    * (e.g. to write it out at once); `total` is the number of conditions.

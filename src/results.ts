@@ -9,6 +9,7 @@ import type {
   ModalAnalysis,
   ResolvedCriteriaSet,
   Results,
+  ResultsHead,
   VerdictCounts,
 } from './types.js';
 
@@ -47,6 +48,18 @@ export function countVerdicts(findings: Iterable<Finding>): VerdictCounts {
   return counts;
 }
 
+/** The counts of several parts (e.g. the shares of a sweep) added up. */
+export function addVerdictCounts(parts: Iterable<VerdictCounts>): VerdictCounts {
+  const total: VerdictCounts = { pass: 0, marginal: 0, fail: 0, not_evaluated: 0 };
+  for (const p of parts) {
+    total.pass += p.pass;
+    total.marginal += p.marginal;
+    total.fail += p.fail;
+    total.not_evaluated += p.not_evaluated;
+  }
+  return total;
+}
+
 export interface ResultsParts {
   request: { toolVersion: string; command: string[]; generatedAt: string };
   model: AircraftModel;
@@ -55,7 +68,7 @@ export interface ResultsParts {
 }
 
 /** Everything of the results but the summary and the conditions, in the results' key order. */
-export function resultsHead(parts: ResultsParts): Omit<Results, 'summary' | 'conditions'> {
+export function resultsHead(parts: ResultsParts): ResultsHead {
   return {
     format: 'modalgate-results/1',
     tool: { name: 'modalgate', version: parts.request.toolVersion },

@@ -268,6 +268,9 @@ export interface Results {
   conditions: ConditionResult[];
 }
 
+/** The results without their summary and conditions: all that is known before the check. */
+export type ResultsHead = Omit<Results, 'summary' | 'conditions'>;
+
 // ---------------------------------------------------------------- criteria (resolved form)
 
 export type Confidence = 'published' | 'memory';

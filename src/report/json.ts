@@ -15,13 +15,10 @@
  * (`compactOpening`, `summaryText`, `conditionJson`), so that file has these same bytes.
  */
 import { InternalError } from '../errors.js';
-import type { ConditionResult, Results, VerdictCounts } from '../types.js';
+import type { ConditionResult, Results, ResultsHead, VerdictCounts } from '../types.js';
 
 /** Up to this many conditions the file is indented; above, it has one compact line per condition. */
 export const INDENT_UP_TO_CONDITIONS = 200;
-
-/** The results without their summary and conditions: all that is known before the check. */
-export type ResultsHead = Omit<Results, 'summary' | 'conditions'>;
 
 /**
  * [characters] width of each count in a compact file's summary. The counts are padded with

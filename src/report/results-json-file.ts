@@ -13,9 +13,9 @@
  */
 import { closeSync, openSync, renameSync, rmSync, writeSync } from 'node:fs';
 import { InternalError } from '../errors.js';
-import type { ConditionResult, VerdictCounts } from '../types.js';
+import type { ConditionResult, ResultsHead, VerdictCounts } from '../types.js';
 import { outputError } from './output-error.js';
-import { compactOpening, conditionJson, summaryText, type ResultsHead } from './json.js';
+import { compactOpening, conditionJson, summaryText } from './json.js';
 import { tempPathBeside } from './write-atomic.js';
 
 /** [bytes] the buffer each condition's line is encoded into, written out when full */

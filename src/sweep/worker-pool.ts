@@ -7,7 +7,7 @@
 import { Worker } from 'node:worker_threads';
 import { InternalError, type InputIssue } from '../errors.js';
 import { rememberConditionsJson } from '../report/json.js';
-import { countVerdicts } from '../results.js';
+import { addVerdictCounts, countVerdicts } from '../results.js';
 import type { AircraftClass, ConditionResult, FlightCondition, ResolvedCriteriaSet } from '../types.js';
 import { checkConditions, type ConditionsChecked } from './check-conditions.js';
 import type { BatchMessage, ShareMessage, WorkerMessage } from './messages.js';
@@ -59,7 +59,8 @@ export async function checkConditionsInWorkers(
     for (const r of part.results) results.push(r);
     for (const i of part.issues) issues.push(i);
   }
-  return { results, issues, summary: countVerdicts(results.flatMap((r) => r.findings)) };
+  // each part has counted its own findings already
+  return { results, issues, summary: addVerdictCounts(parts.map((p) => p.summary)) };
 }
 
 /** [from, to) ranges of `count` nearly equal contiguous shares of `n` items */

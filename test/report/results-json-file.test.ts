@@ -9,7 +9,8 @@ import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { runCheck } from '../../src/check.js';
-import { conditionJson, INDENT_UP_TO_CONDITIONS, renderResultsJson, type ResultsHead } from '../../src/report/json.js';
+import { conditionJson, INDENT_UP_TO_CONDITIONS, renderResultsJson } from '../../src/report/json.js';
+import type { ResultsHead } from '../../src/types.js';
 import { ResultsJsonFile } from '../../src/report/results-json-file.js';
 import type { CheckOutcome } from '../../src/check.js';
 

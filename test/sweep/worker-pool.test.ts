@@ -14,7 +14,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { loadCriteriaSet } from '../../src/load/criteria-file.js';
 import { parseModel } from '../../src/load/model-file.js';
 import { renderResultsJson } from '../../src/report/json.js';
-import { assembleResults } from '../../src/results.js';
+import { addVerdictCounts, assembleResults, countVerdicts } from '../../src/results.js';
 import { checkConditions } from '../../src/sweep/check-conditions.js';
 import { isJsonSafe } from '../../src/sweep/json-safe.js';
 import { checkConditionsInWorkers, readBatch, splitShares } from '../../src/sweep/worker-pool.js';
@@ -144,6 +144,8 @@ describe('worker path of a large sweep', () => {
     expect(parallel.results.map((r) => r.id)).toEqual(model.conditions.map((c) => c.id));
     expect(parallel.issues).toEqual(serial.issues);
     expect(parallel.results).toStrictEqual(serial.results);
+    expect(parallel.summary).toEqual(serial.summary);
+    expect(parallel.summary).toEqual(countVerdicts(serial.results.flatMap((r) => r.findings)));
     // progress rises to the total
     expect(seen.at(-1)).toBe(3000);
     expect([...seen].sort((a, b) => a - b)).toEqual(seen);
@@ -184,6 +186,16 @@ describe('reading a batch back from a worker', () => {
 });
 
 describe('sharing out a sweep', () => {
+  it('adds up the verdict counts of the shares', () => {
+    expect(addVerdictCounts([])).toEqual({ pass: 0, marginal: 0, fail: 0, not_evaluated: 0 });
+    expect(
+      addVerdictCounts([
+        { pass: 3, marginal: 1, fail: 0, not_evaluated: 2 },
+        { pass: 4, marginal: 0, fail: 5, not_evaluated: 1 },
+      ]),
+    ).toEqual({ pass: 7, marginal: 1, fail: 5, not_evaluated: 3 });
+  });
+
   it('splits into contiguous shares that cover every condition once', () => {
     expect(splitShares(10, 3)).toEqual([
       [0, 3],
