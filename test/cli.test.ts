@@ -199,7 +199,7 @@ describe('modalgate modes and criteria', () => {
     const json = path.join(scratch(), 'm.json');
     const r = await run('modes', sample, '--json', json);
     expect(r.code).toBe(0);
-    expect(r.out).toContain('dutch roll');
+    expect(r.out).toContain('Dutch roll');
     const results = JSON.parse(readFileSync(json, 'utf8'));
     expect(results.conditions.every((c: { findings: unknown[] }) => c.findings.length === 0)).toBe(true);
   });

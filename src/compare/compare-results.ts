@@ -6,6 +6,7 @@
  */
 import { countVerdicts } from '../results.js';
 import type { ConditionResult, Finding, Level, ModeKind, Quantity, Results, Verdict, VerdictCounts } from '../types.js';
+import { isRealMode, modeStability, type Stability } from '../modes/stability.js';
 import { figureChange, type FigureChange } from './figure-change.js';
 import { compareInputs, type InputsComparison } from './input-changes.js';
 import { classifyTransition, concernOf, type TransitionKind } from './verdict-transition.js';
@@ -54,6 +55,14 @@ export interface ModeFigureChange {
   naturalFrequency: FigureChange;
   /** [-] zeta */
   dampingRatio: FigureChange;
+  /** [s] time constant of a real convergent mode */
+  timeConstant: FigureChange;
+  /** [s] time to double of a divergent mode */
+  timeToDouble: FigureChange;
+  /** stability in each run (null where the mode is absent): a mode turning divergent is the change to read first */
+  stability: { baseline: Stability | null; current: Stability | null };
+  /** every root of the mode is real in both runs where present: zeta and omega_n say nothing of it */
+  real: boolean;
 }
 
 /** A condition present in one run only, with the verdicts it carries there. */
@@ -211,6 +220,10 @@ function pairModes(now: ConditionResult, before: ConditionResult): ModeFigureCha
         presence: m && o ? 'both' : m ? 'added' : 'removed',
         naturalFrequency: figureChange(o?.naturalFrequency, m?.naturalFrequency),
         dampingRatio: figureChange(o?.dampingRatio, m?.dampingRatio),
+        timeConstant: figureChange(o?.timeConstant, m?.timeConstant),
+        timeToDouble: figureChange(o?.timeToDouble, m?.timeToDouble),
+        stability: { baseline: o ? modeStability(o) : null, current: m ? modeStability(m) : null },
+        real: (m === undefined || isRealMode(m)) && (o === undefined || isRealMode(o)),
       });
     }
   }

@@ -6,6 +6,7 @@
 import { formatSig } from '../report/format-number.js';
 import type { Comparison, FindingChange, ModeFigureChange } from './compare-results.js';
 import type { FigureChange } from './figure-change.js';
+import { modeChangeItems, stabilityChangeText, type ModeFigure } from './mode-change-items.js';
 import type { InputChange } from './input-changes.js';
 
 /** Rows shown per list; a 10,000-condition sweep would otherwise flood the terminal. */
@@ -111,6 +112,13 @@ function figureText(f: FigureChange, unit: string): string {
   return `${head} (${sign}${formatSig(f.delta)}${rel})`;
 }
 
+const FIGURE_LABEL: Record<ModeFigure, { label: string; unit: string }> = {
+  naturalFrequency: { label: 'omega_n', unit: 'rad/s' },
+  dampingRatio: { label: 'zeta', unit: '' },
+  timeConstant: { label: 'time constant', unit: 's' },
+  timeToDouble: { label: 'time to double', unit: 's' },
+};
+
 function largestModeChanges(modes: ModeFigureChange[]): string[] {
   const rows: { size: number; text: string }[] = [];
   for (const m of modes) {
@@ -119,9 +127,13 @@ function largestModeChanges(modes: ModeFigureChange[]): string[] {
       rows.push({ size: Number.POSITIVE_INFINITY, text: `  ${m.presence === 'added' ? '+' : '-'} ${where}: mode ${m.presence === 'added' ? 'new in this run' : 'only in the baseline'}` });
       continue;
     }
-    for (const [label, change, unit] of [['omega_n', m.naturalFrequency, 'rad/s'], ['zeta', m.dampingRatio, '']] as const) {
-      if (change.relative === null || change.relative === 0) continue;
-      rows.push({ size: Math.abs(change.relative), text: `  ~ ${where}: ${label} ${figureText(change, unit)}` });
+    for (const item of modeChangeItems(m)) {
+      if (item.kind === 'stability') {
+        rows.push({ size: item.size, text: `  ! ${where}: ${stabilityChangeText(item.to)} (was ${item.from})` });
+        continue;
+      }
+      const { label, unit } = FIGURE_LABEL[item.figure];
+      rows.push({ size: item.size, text: `  ~ ${where}: ${label} ${figureText(item.change, unit)}` });
     }
   }
   return rows

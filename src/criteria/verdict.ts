@@ -48,13 +48,30 @@ export function judge(input: VerdictInput): Judgement {
   const governing = governingBoundary(input);
   const margin = governing && Number.isFinite(governing.margin) ? governing.margin : null;
 
+  // One bound for every level (a civil rule's single requirement, a floor the standard sets at
+  // Level 3 only): it is met or not met, and says nothing of the level on its own.
+  const single = singleRequirement(bounds);
   if (level === null || level > requiredLevel) {
-    return { level, verdict: 'fail', margin, reason: failReason(level, requiredLevel, governing?.side) };
+    return { level, verdict: 'fail', margin, reason: single ? singleReason(0, governing?.side) : failReason(level, requiredLevel, governing?.side) };
   }
   if (governing && governing.margin < bandAround(governing.boundary, input)) {
-    return { level, verdict: 'marginal', margin, reason: marginalReason(level, requiredLevel, governing.side) };
+    return { level, verdict: 'marginal', margin, reason: single ? singleReason(1, governing.side) : marginalReason(level, requiredLevel, governing.side) };
   }
-  return { level, verdict: 'pass', margin, reason: passReason(level, requiredLevel) };
+  return { level, verdict: 'pass', margin, reason: single ? singleReason(2, undefined) : passReason(level, requiredLevel) };
+}
+
+function singleRequirement(bounds: ExpandedBounds): boolean {
+  const a = bounds['1'];
+  return LEVELS.every((l) => bounds[levelKey(l)].min === a.min && bounds[levelKey(l)].max === a.max);
+}
+
+/** 0 not met, 1 met within the marginal band, 2 met. */
+function singleReason(state: 0 | 1 | 2, side: 'min' | 'max' | undefined): string {
+  return once(400 + state * 10 + (side ? sideCode[side] : 0), () => {
+    if (state === 2) return 'requirement met (one bound for every level)';
+    const where = side ? ` ${state === 0 ? sideWords[side] : `near the ${boundaryWords[side]}`}` : '';
+    return state === 0 ? `requirement not met (one bound for every level)${where ? `:${where}` : ''}` : `requirement met (one bound for every level), within the marginal band of the${where.replace(' near the', '')}`;
+  });
 }
 
 /*

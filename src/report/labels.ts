@@ -38,3 +38,24 @@ export function classLabel(cls: AircraftClass): string {
 export function categoryLabel(category: Category | null): string {
   return category === null ? 'not assigned' : `Category ${category}`;
 }
+
+/** Plain-ASCII names for the terminal (and JUnit): the trade's spelling, no internal names. */
+export const MODE_TEXT: Record<ModeKind, string> = {
+  short_period: 'short period',
+  phugoid: 'phugoid',
+  dutch_roll: 'Dutch roll',
+  roll: 'roll',
+  spiral: 'spiral',
+  roll_spiral: 'roll-spiral (coupled)',
+  kinematic: 'kinematic',
+  other: 'other',
+};
+
+export const QUANTITY_TEXT: Record<Quantity, string> = {
+  damping_ratio: 'damping ratio',
+  natural_frequency: 'natural frequency',
+  cap: 'CAP',
+  damping_frequency_product: 'zeta*omega_n',
+  time_to_double: 'time to double',
+  time_constant: 'time constant',
+};

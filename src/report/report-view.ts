@@ -21,6 +21,9 @@ export interface ChartView {
 
 export interface ModeRow {
   kind: string;
+  /** convergent, neutral or divergent: read before any figure */
+  stability: string;
+  divergent: boolean;
   eigenvalues: string;
   naturalFrequency: string;
   dampingRatio: string;
@@ -30,6 +33,12 @@ export interface ModeRow {
   timeToDouble: string;
   basis: string;
   ambiguous: boolean;
+  /** the mode's one level: the worst over its criteria (`Level 2`, `no level`, `bounds met`, ...) */
+  level: string;
+  /** the worst verdict of the mode's findings; null when no criterion applies to the mode */
+  levelMark: VerdictMark | null;
+  /** the criterion that decides `level` */
+  decidedBy: string | null;
 }
 
 export interface FindingRow {
@@ -43,8 +52,12 @@ export interface FindingRow {
   /** value, bounds and margin are in `unit` */
   value: string;
   bounds: { l1: string; l2: string; l3: string };
-  /** `Level 1`, or `none` when no level's bounds hold */
+  /** the one bound of a single-requirement criterion (the same at every level), shown across the level columns */
+  singleBound: string | null;
+  /** `Level 1`, `no level` when no level's bounds hold; `met` / `not met` for a single requirement */
   levelReached: string;
+  /** defaults the finding leans on (failing and marginal findings only) */
+  defaults: string[];
   mark: VerdictMark;
   margin: string;
   source: string;
@@ -270,6 +283,8 @@ export interface ReportView {
   tally: VerdictTally[];
   totalFindings: number;
   memoryFindings: number;
+  /** what "marginal" means, with the band of each criteria set (first page) */
+  marginalNote: string;
   /** what `--detail` left in and out, in words */
   detail: string;
   /** shown when there is more than one condition */

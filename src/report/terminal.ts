@@ -5,7 +5,11 @@
  */
 import type { ConditionResult, Finding, Results, Verdict } from '../types.js';
 import { hasIssue } from './condition-status.js';
+import { isRealMode, modeStability } from '../modes/stability.js';
+import { defaultsBehind } from './finding-defaults.js';
 import { formatEigenvalues, formatSig } from './format-number.js';
+import { MODE_TEXT, QUANTITY_TEXT } from './labels.js';
+import { levelReachedWords, modeLevel, modeLevelWords } from './mode-levels.js';
 import { textTable } from './text-table.js';
 
 export interface TerminalOptions {
@@ -57,13 +61,15 @@ export function formatResultsText(results: Results, options: TerminalOptions): s
     if (compact) {
       const issues = { ...c, findings: c.findings.filter((f) => f.verdict !== 'pass') };
       out.push(indent(findingsTable(issues, (v, t) => paint(VERDICT_COLOR[v], t))));
+      out.push(...defaultLines(c));
       continue;
     }
     for (const n of c.notes) out.push(`  note: ${n}`);
-    out.push(indent(modesTable(c)));
+    out.push(indent(modesTable(c, options.findings)));
     if (options.findings) {
       if (c.findings.length === 0) out.push('  (no criterion applies to this condition)');
       else out.push(indent(findingsTable(c, (v, t) => paint(VERDICT_COLOR[v], t))));
+      out.push(...defaultLines(c));
       for (const n of c.notApplicable) out.push(`  not applicable: ${n.criterion} (${n.source}): ${n.reason}`);
     }
     for (const w of c.warnings) out.push(paint('\u001b[33m', `  warning: ${w}`));
@@ -104,20 +110,39 @@ function conditionHeading(c: ConditionResult): string {
   return parts.join(', ');
 }
 
-function modesTable(c: ConditionResult): string {
-  const rows = c.modes.map((m) => [
-    m.kind.replace('_', ' ') + (m.ambiguous ? ' (?)' : ''),
-    formatEigenvalues(m.eigenvalues),
-    formatSig(m.naturalFrequency),
-    formatSig(m.dampingRatio),
-    formatSig(m.period),
-    formatSig(m.timeConstant),
-    formatSig(m.timeToHalf),
-    formatSig(m.timeToDouble),
-  ]);
+/** The mode's one level (worst of its criteria) and the criterion deciding it, for the modes table. */
+function modeLevelText(c: ConditionResult, m: ConditionResult['modes'][number], withLevels: boolean): string {
+  if (!withLevels) return '';
+  const l = modeLevel(c, m.kind);
+  if (l.verdict === null) return '-';
+  const level = modeLevelWords(l);
+  return l.decidedBy ? `${level} (${l.decidedBy})` : level;
+}
+
+function modesTable(c: ConditionResult, withLevels: boolean): string {
+  // A real root is read by its time constant or time to half/double and its stability, never
+  // by a damping ratio of +-1 and a "natural frequency"; a divergent one has no time constant.
+  const rows = c.modes.map((m) => {
+    const real = isRealMode(m);
+    const stability = modeStability(m);
+    const row = [
+      MODE_TEXT[m.kind] + (m.ambiguous ? ' (?)' : ''),
+      stability,
+      formatEigenvalues(m.eigenvalues),
+      real ? '-' : formatSig(m.naturalFrequency),
+      real ? '-' : formatSig(m.dampingRatio),
+      formatSig(m.period),
+      real && stability === 'convergent' ? formatSig(m.timeConstant) : '-',
+      formatSig(m.timeToHalf),
+      formatSig(m.timeToDouble),
+    ];
+    if (withLevels) row.push(modeLevelText(c, m, withLevels));
+    return row;
+  });
   return textTable(
     [
       { header: 'mode' },
+      { header: 'stability' },
       { header: 'eigenvalues [1/s]' },
       { header: 'wn [rad/s]', align: 'right' },
       { header: 'zeta', align: 'right' },
@@ -125,6 +150,7 @@ function modesTable(c: ConditionResult): string {
       { header: 'tau [s]', align: 'right' },
       { header: 't1/2 [s]', align: 'right' },
       { header: 't2 [s]', align: 'right' },
+      ...(withLevels ? [{ header: 'mode level (decided by)' }] : []),
     ],
     rows,
   );
@@ -133,13 +159,13 @@ function modesTable(c: ConditionResult): string {
 function findingsTable(c: ConditionResult, paintVerdict: (v: Verdict, text: string) => string): string {
   const rows = c.findings.map((f) => [
     f.criterion,
-    `${f.mode.replace('_', ' ')} ${f.quantity.replace(/_/g, ' ')}`,
+    `${MODE_TEXT[f.mode]} ${QUANTITY_TEXT[f.quantity]}`,
     valueText(f),
     boundsText(f.bounds[String(c.requiredLevel ?? 1) as '1' | '2' | '3']),
-    f.level === null ? 'none' : `Level ${f.level}`,
+    levelReachedWords(f) ?? '-',
     VERDICT_TEXT[f.verdict],
     formatSig(f.margin),
-    f.confidence === 'memory' ? 'memory' : '',
+    f.confidence === 'memory' ? 'from memory' : '',
   ]);
   return textTable(
     [
@@ -150,7 +176,7 @@ function findingsTable(c: ConditionResult, paintVerdict: (v: Verdict, text: stri
       { header: 'reached' },
       { header: 'verdict' },
       { header: 'margin', align: 'right' },
-      { header: 'values' },
+      { header: 'boundary values' },
     ],
     rows,
     (i, j, padded) => {
@@ -158,6 +184,17 @@ function findingsTable(c: ConditionResult, paintVerdict: (v: Verdict, text: stri
       return j === 5 && f ? paintVerdict(f.verdict, padded) : padded;
     },
   );
+}
+
+/** Under the findings table: the defaults each failing or marginal finding leans on. */
+function defaultLines(c: ConditionResult): string[] {
+  const out: string[] = [];
+  for (const f of c.findings) {
+    if (f.verdict !== 'fail' && f.verdict !== 'marginal') continue;
+    const behind = defaultsBehind(c, f);
+    if (behind.length > 0) out.push(`  defaults behind ${f.criterion}: ${behind.join('; ')}`);
+  }
+  return out;
 }
 
 function valueText(f: Finding): string {

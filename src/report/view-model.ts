@@ -21,7 +21,10 @@ import type {
   ChartView, ConditionView, CriteriaSetView, FindingRow, ModeRow, OverviewView, ReportView, VerdictTally,
 } from './report-view.js';
 import { VERDICT_ORDER, verdictMark, worstVerdict } from './verdict-marks.js';
-import { dateText, eigenvalueText, levelBoundsText, lengthText, sig, signedSig, unitText, withUnit } from './view-format.js';
+import { dateText, eigenvalueText, levelBoundsText, lengthText, NONE, sig, signedSig, unitText, withUnit } from './view-format.js';
+import { isRealMode, modeStability, type Stability } from '../modes/stability.js';
+import { defaultsBehind } from './finding-defaults.js';
+import { isSingleRequirement, levelReachedWords, modeLevel, modeLevelWords } from './mode-levels.js';
 
 export interface ReportViewOptions {
   reportId: string;
@@ -57,23 +60,36 @@ function tallyOf(counts: VerdictCounts): VerdictTally[] {
   return VERDICT_ORDER.map((v) => ({ mark: verdictMark(v), count: counts[v] }));
 }
 
-function modeRow(mode: Mode): ModeRow {
+const STABILITY_WORD: Record<Stability, string> = { convergent: 'convergent', neutral: 'neutral', divergent: 'divergent' };
+
+function modeRow(mode: Mode, c: ConditionResult): ModeRow {
+  // A real root has no damping ratio or natural frequency to show; a divergent one no time
+  // constant either (it would be negative): its time to double says how fast it grows.
+  const real = isRealMode(mode);
+  const stability = modeStability(mode);
+  const level = modeLevel(c, mode.kind);
   return {
     kind: MODE_LABEL[mode.kind],
+    stability: STABILITY_WORD[stability],
+    divergent: stability === 'divergent',
     eigenvalues: eigenvalueText(mode.eigenvalues),
-    naturalFrequency: sig(mode.naturalFrequency),
-    dampingRatio: sig(mode.dampingRatio),
+    naturalFrequency: real ? NONE : sig(mode.naturalFrequency),
+    dampingRatio: real ? NONE : sig(mode.dampingRatio),
     period: sig(mode.period),
-    timeConstant: sig(mode.timeConstant),
+    timeConstant: real && stability === 'convergent' ? sig(mode.timeConstant) : NONE,
     timeToHalf: sig(mode.timeToHalf),
     timeToDouble: sig(mode.timeToDouble),
     basis: mode.basis,
     ambiguous: mode.ambiguous,
+    level: modeLevelWords(level),
+    levelMark: level.verdict === null ? null : verdictMark(level.verdict),
+    decidedBy: level.decidedBy,
   };
 }
 
-function findingRow(f: Finding): FindingRow {
+function findingRow(f: Finding, c: ConditionResult): FindingRow {
   const unit = f.unit.trim() !== '' ? f.unit : QUANTITY_UNIT[f.quantity];
+  const bounds = levelBoundsText(f.bounds);
   return {
     criterion: f.criterion,
     set: f.set,
@@ -82,8 +98,10 @@ function findingRow(f: Finding): FindingRow {
     quantity: QUANTITY_LABEL[f.quantity],
     unit: unitText(unit),
     value: sig(f.value),
-    bounds: levelBoundsText(f.bounds),
-    levelReached: f.verdict === 'not_evaluated' ? '\u2013' : f.level === null ? 'none' : `Level ${f.level}`,
+    bounds,
+    singleBound: isSingleRequirement(f) ? bounds.l1 : null,
+    levelReached: levelReachedWords(f) ?? NONE,
+    defaults: f.verdict === 'fail' || f.verdict === 'marginal' ? defaultsBehind(c, f) : [],
     mark: verdictMark(f.verdict),
     margin: signedSig(f.margin),
     source: f.source,
@@ -145,8 +163,8 @@ function conditionView(c: ConditionResult, anchor: string, withCharts: boolean, 
     coupling: sig(c.coupling, 2),
     mark: verdictMark(conditionVerdict(c)),
     tally: tallyOf(countVerdicts(c.findings)),
-    modes: c.modes.map(modeRow),
-    findings: c.findings.map(findingRow),
+    modes: c.modes.map((m) => modeRow(m, c)),
+    findings: c.findings.map((f) => findingRow(f, c)),
     notApplicable: c.notApplicable.map((n) => ({ criterion: n.criterion, title: n.title, source: n.source, reason: n.reason })),
     warnings: [...c.warnings, ...derivedWarnings(c)],
     notes: c.notes,
@@ -222,6 +240,16 @@ function commandText(args: readonly string[]): string {
   return args.map((a) => (/^[\w@%+=:,./-]+$/.test(a) ? a : `'${a.replace(/'/g, `'\\''`)}'`)).join(' ');
 }
 
+/** What "marginal" means here, with each set's band: the term is modalgate's own, not the standards'. */
+function marginalText(sets: ResolvedCriteriaSet[]): string {
+  const bands = sets.map((s) => `${setView(s).marginalBand} (${s.id})`);
+  return (
+    'Marginal is this tool\'s own word, not a level of the standards: the required level is reached, but the value lies ' +
+    `within the marginal band of that level's boundary: ${bands.length > 0 ? bands.join('; ') : 'no criteria set'}. ` +
+    'The band is set in the criteria file (marginalBand).'
+  );
+}
+
 export function buildReportView(results: Results, sets: ResolvedCriteriaSet[], options: ReportViewOptions): ReportView {
   const allFindings = results.conditions.flatMap((c) => c.findings);
   const counts = countVerdicts(allFindings);
@@ -252,6 +280,7 @@ export function buildReportView(results: Results, sets: ResolvedCriteriaSet[], o
     tally: tallyOf(counts),
     totalFindings: allFindings.length,
     memoryFindings: allFindings.filter((f) => f.confidence === 'memory').length,
+    marginalNote: marginalText(sets),
     detail: detailText.charAt(0).toUpperCase() + detailText.slice(1),
     envelope: results.conditions.length > 1 ? envelopeView(results.conditions, sets, anchorOf) : null,
     comparison: options.comparison ? comparisonView(options.comparison, (id) => anchorById.get(id) ?? null) : null,

@@ -96,3 +96,21 @@ describe('judge: strict bounds and unreachable levels', () => {
     expect(j).toMatchObject({ level: 1, verdict: 'pass', margin: null });
   });
 });
+
+describe('judge: a single requirement (one bound for every level) is met or not met', () => {
+  // 14 CFR 25.181 style rule written at Level 1 only (levels left out take the bound above);
+  // the 0.052 damping floor is a test value.
+  const single: LevelBounds = { '1': { min: 0.052 } };
+  it.each([
+    [0.2, 'pass', 'requirement met (one bound for every level)'],
+    [0.053, 'marginal', 'requirement met (one bound for every level), within the marginal band of the minimum'],
+    [0.03, 'fail', 'requirement not met (one bound for every level): below the minimum'],
+  ])('zeta %s: %s', (value, verdict, reason) => {
+    const j = run(single, value, 1);
+    expect(j.verdict).toBe(verdict);
+    expect(j.reason).toBe(reason);
+  });
+  it('a graded criterion keeps its level words', () => {
+    expect(run(phugoid, 0.1, 1).reason).toBe('Level 1 reached (Level 1 required)');
+  });
+});

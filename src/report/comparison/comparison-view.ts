@@ -4,6 +4,7 @@
  * conditions added and removed, verdict transitions (regressions first, as compareResults
  * orders them), figures that moved with an unchanged verdict, and the largest modal changes.
  */
+import { modeChangeItems, stabilityChangeText, type ModeFigure } from '../../compare/mode-change-items.js';
 import type { Comparison, FindingChange, ModeFigureChange } from '../../compare/compare-results.js';
 import type { FigureChange } from '../../compare/figure-change.js';
 import type { InputChange } from '../../compare/input-changes.js';
@@ -84,6 +85,13 @@ function movedMagnitude(f: FindingChange): number {
   return f.value.baseline !== f.value.current ? Number.POSITIVE_INFINITY : 0;
 }
 
+const FIGURE_TEXT: Record<ModeFigure, { figure: string; unit: string }> = {
+  naturalFrequency: { figure: '\u03c9n', unit: 'rad/s' },
+  dampingRatio: { figure: '\u03b6', unit: '' },
+  timeConstant: { figure: 'T', unit: 's' },
+  timeToDouble: { figure: 't\u2082', unit: 's' },
+};
+
 function modeChanges(modes: readonly ModeFigureChange[], limit: number): ComparisonView['modeChanges'] {
   const rows: { size: number; order: number; row: ComparisonView['modeChanges'][number] }[] = [];
   modes.forEach((m, order) => {
@@ -92,15 +100,20 @@ function modeChanges(modes: readonly ModeFigureChange[], limit: number): Compari
       rows.push({ size: Number.POSITIVE_INFINITY, order, row: { condition: m.condition, mode, figure: 'mode', change: m.presence === 'added' ? 'new in this run' : 'only in the baseline', relative: NONE } });
       return;
     }
-    for (const [figure, change, unit] of [['\u03c9n', m.naturalFrequency, 'rad/s'], ['\u03b6', m.dampingRatio, '']] as const) {
-      if (change.relative === null || change.relative === 0) continue;
+    for (const item of modeChangeItems(m)) {
+      if (item.kind === 'stability') {
+        rows.push({ size: item.size, order, row: { condition: m.condition, mode, figure: 'stability', change: `${item.from} \u2192 ${item.to}: ${stabilityChangeText(item.to)}`, relative: NONE } });
+        continue;
+      }
+      const { figure, unit } = FIGURE_TEXT[item.figure];
+      const change = item.change;
       rows.push({
-        size: Math.abs(change.relative),
+        size: item.size,
         order,
         row: {
           condition: m.condition, mode, figure: unit ? `${figure} [${unit}]` : figure,
           change: `${sig(change.baseline)} \u2192 ${sig(change.current)} (${signedSig(change.delta)})`,
-          relative: `${signedSig(change.relative * 100, 2)}\u202f%`,
+          relative: `${signedSig((change.relative ?? 0) * 100, 2)}\u202f%`,
         },
       });
     }
