@@ -45,6 +45,21 @@ export interface LiftData {
   liftCurveSlope: number;
 }
 
+/** The pilot's control axes a condition may name. */
+export type ControlAxis = 'pitch' | 'roll' | 'yaw';
+
+/** One cockpit control: an input of the state-space model, in the unit the model was written in. */
+export interface CockpitControl {
+  /** name of the input (a column of B) */
+  input: string;
+  /** unit of the input as written (B and D are per this unit); recorded, not converted */
+  unit: string;
+  /** [input unit] full control; null when not given */
+  max: number | null;
+}
+
+export type CockpitControls = Partial<Record<ControlAxis, CockpitControl>>;
+
 export interface FlightCondition {
   id: string;
   /** flight-phase code as written, e.g. CR, PA, CO */
@@ -62,6 +77,8 @@ export interface FlightCondition {
   form: DynamicsForm;
   system: StateSpace;
   liftData: LiftData | null;
+  /** the cockpit controls named by the condition (empty when none) */
+  controls: CockpitControls;
   /** conversions and defaults applied while building the model, shown in every output */
   notes: string[];
   place: Place;

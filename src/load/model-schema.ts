@@ -156,6 +156,28 @@ export const nondimensionalSchema = z
   })
   .strict();
 
+/**
+ * One cockpit control: the state-space input it drives (a column of B), the unit that input
+ * was written in, and optionally the full control travel `max` in that unit.
+ */
+export const cockpitControlSchema = z
+  .object({
+    input: name,
+    unit: name,
+    /** [input unit] full control */
+    max: positive.optional(),
+  })
+  .strict();
+
+/** The pilot's controls by axis; at least one. */
+export const cockpitControlsSchema = z
+  .object({
+    pitch: cockpitControlSchema.optional(),
+    roll: cockpitControlSchema.optional(),
+    yaw: cockpitControlSchema.optional(),
+  })
+  .strict();
+
 export const conditionSchema = z
   .object({
     id: name,
@@ -172,6 +194,8 @@ export const conditionSchema = z
     longitudinal: longitudinalSchema.optional(),
     lateral: lateralSchema.optional(),
     nondimensional: nondimensionalSchema.optional(),
+    /** the pilot's controls, naming inputs of the model */
+    controls: cockpitControlsSchema.optional(),
   })
   .strict();
 
@@ -230,6 +254,7 @@ export const modelFileFullSchema = modelFileSchema.extend({
 export type WrittenModelFile = z.infer<typeof modelFileFullSchema>;
 export type WrittenCondition = z.infer<typeof conditionSchema>;
 export type WrittenConditionTable = z.infer<typeof conditionTableSchema>;
+export type WrittenCockpitControls = z.infer<typeof cockpitControlsSchema>;
 export type WrittenStateSpace = z.infer<typeof stateSpaceSchema>;
 export type WrittenLongitudinal = z.infer<typeof longitudinalSchema>;
 export type WrittenLateral = z.infer<typeof lateralSchema>;

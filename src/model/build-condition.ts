@@ -8,6 +8,7 @@ import type { WrittenCondition } from '../load/model-schema.js';
 import type { DynamicsForm, FlightCondition, Level, LiftData, StateSpace, UnitSystem } from '../types.js';
 import { UNIT_FACTORS, UNIT_WORDS } from '../units.js';
 import { buildNondimensional } from './build-nondimensional.js';
+import { buildControls } from './cockpit-controls.js';
 import { stateSpaceToSI } from './convert-to-si.js';
 import { buildLateralPart, buildLongitudinalPart, type Part } from './derivative-parts.js';
 import type { Built, ModelProblem } from './problem.js';
@@ -120,6 +121,9 @@ export function buildCondition(written: WrittenCondition, settings: BuildSetting
     notes.push(...si.notes);
   }
 
+  const { controls, problems: controlProblems } = buildControls(written.controls, system, [...path, 'controls']);
+  if (controlProblems.length > 0) return { ok: false, problems: controlProblems };
+
   return {
     ok: true,
     value: {
@@ -133,6 +137,7 @@ export function buildCondition(written: WrittenCondition, settings: BuildSetting
       form,
       system,
       liftData,
+      controls,
       notes,
     },
     notes: [],

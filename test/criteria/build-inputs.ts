@@ -76,6 +76,7 @@ export function conditionOf(fields: Partial<FlightCondition> & { phase: string }
     form: 'stateSpace',
     system: { states: [], A: [], inputs: [], B: [], outputs: [], C: [], D: [] },
     liftData: null,
+    controls: {},
     notes: [],
     place: { file: 'test-model.yaml', line: 3, column: 5 },
     ...fields,
