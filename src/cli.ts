@@ -19,7 +19,8 @@ import { formatCriteriaSetText } from './report/criteria-text.js';
 import { InputError } from './errors.js';
 import { loadCriteriaSet } from './load/criteria-file.js';
 import { readInputFile } from './load/read-file.js';
-import { checkOutputPaths, renderOutputs, writeArtifacts, type OutputRequest } from './outputs.js';
+import { checkOutputPaths, checkOutputsAreNotInputs, renderOutputs, writeArtifacts, type OutputPath, type OutputRequest } from './outputs.js';
+import { OutputSetError, removeLiveTemporaries } from './report/write-atomic.js';
 import { formatResultsText } from './report/terminal.js';
 import { progressReporter } from './progress.js';
 
@@ -81,9 +82,16 @@ export async function main(argv: string[], io: Io = defaultIo()): Promise<number
     .argument('<model>', 'model file (modalgate-model/1, YAML or JSON)')
     .option('--json <file>', 'write results JSON (modes only, no findings)')
     .action(async (modelPath: string, opts: { json?: string }) => {
-      const outcome = await runCheck({ model: modelPath, criteria: [], ...runContext(argv, io) });
+      const outputs: OutputPath[] = opts.json !== undefined ? [{ option: '--json', path: opts.json }] : [];
+      await checkOutputPaths(outputs);
+      const outcome = await runCheck({
+        model: modelPath,
+        criteria: [],
+        ...runContext(argv, io),
+        onStart: (head) => checkOutputsAreNotInputs(outputs, head.inputs),
+      });
       io.out(formatResultsText(outcome.results, { color: io.color, detail: 'all', findings: false }));
-      await writeAndTell(outcome, { ...(opts.json ? { json: opts.json } : {}), paper: 'A4', failOn: 'fail', detail: 'all' }, io);
+      await writeAndTell(outcome, { ...(opts.json !== undefined ? { json: opts.json } : {}), paper: 'A4', failOn: 'fail', detail: 'all' }, io);
     });
 
   const criteria = program.command('criteria').description('inspect criteria files');
@@ -131,15 +139,18 @@ interface CheckCommandOptions {
 async function checkCommand(modelPath: string, opts: CheckCommandOptions, argv: string[], io: Io): Promise<number> {
   const criteria = opts.criteria.length > 0 ? opts.criteria : [DEFAULT_CRITERIA];
   if (opts.criteria.length === 0) io.out(`no --criteria given: using the shipped set ${DEFAULT_CRITERIA}`);
-  // Read the baseline and check the output folders before any work, so that a bad baseline
-  // or an output that cannot be written is reported at once.
-  const baseline = opts.baseline ? await readInputFile(opts.baseline) : undefined;
-  await checkOutputPaths([opts.html, opts.pdf, opts.json, opts.junit].filter((p): p is string => p !== undefined));
+  // Read the baseline and check the outputs (the default report too) before any work, so that
+  // a bad baseline or an output that cannot be written is reported at once; once the model
+  // and criteria are read, no output may be one of them.
+  const baseline = opts.baseline !== undefined ? await readInputFile(opts.baseline) : undefined;
+  const outputs = outputPaths(modelPath, opts);
+  await checkOutputPaths(outputs);
+  const baselineInput = baseline ? [{ role: 'baseline' as const, path: baseline.path, sha256: baseline.sha256 }] : [];
   // A large sweep written only to JSON (and the terminal) is written out as it is checked;
   // only the conditions the terminal lists are kept whole. The report, JUnit and a comparison
   // need every result, so with any of them the results are kept and written at the end.
   const detailFor = (total: number) => opts.detail ?? (total > LARGE_RUN ? 'issues' : 'all');
-  const streamable = opts.json !== undefined && !opts.html && !opts.pdf && !opts.junit && !baseline;
+  const streamable = opts.json !== undefined && opts.html === undefined && opts.pdf === undefined && opts.junit === undefined && !baseline;
   let stream: ResultsJsonFile | undefined;
   const progress = progressReporter();
   try {
@@ -148,11 +159,12 @@ async function checkCommand(modelPath: string, opts: CheckCommandOptions, argv: 
       criteria,
       ...runContext(argv, io),
       onProgress: progress.onProgress,
+      onStart: (head: ResultsHead, total: number) => {
+        checkOutputsAreNotInputs(outputs, [...head.inputs, ...baselineInput]);
+        if (streamable && total > INDENT_UP_TO_CONDITIONS) stream = ResultsJsonFile.open(opts.json!, head);
+      },
       ...(streamable
         ? {
-            onStart: (head: ResultsHead, total: number) => {
-              if (total > INDENT_UP_TO_CONDITIONS) stream = ResultsJsonFile.open(opts.json!, head);
-            },
             onCondition: (r: ConditionResult) => stream?.add(r),
             keep: (r: ConditionResult, total: number) => stream === undefined || keepFor(detailFor(total), r),
           }
@@ -183,16 +195,15 @@ async function reportCheck(outcome: CheckOutcome, context: ReportContext, io: Io
   const total = outcome.conditionCount;
   if (!opts.detail && total > LARGE_RUN) io.out(`${total} conditions: per-condition detail limited to conditions with issues (--detail all to list every one)`);
 
-  const wantsFile = Boolean(opts.html || opts.pdf || opts.json || opts.junit);
-  const html = opts.html ?? (wantsFile ? undefined : defaultHtmlPath(modelPath));
+  const html = outputPaths(modelPath, opts).find((o) => o.option === '--html')?.path;
   io.out(formatResultsText(outcome.results, { color: io.color, detail, findings: true, conditionCount: total }));
   if (comparison) io.out(`\n${formatComparisonText(comparison, { color: io.color })}`);
 
   const request: OutputRequest = {
     ...(html ? { html } : {}),
-    ...(opts.pdf ? { pdf: opts.pdf } : {}),
-    ...(opts.json && !stream ? { json: opts.json } : {}),
-    ...(opts.junit ? { junit: opts.junit } : {}),
+    ...(opts.pdf !== undefined ? { pdf: opts.pdf } : {}),
+    ...(opts.json !== undefined && !stream ? { json: opts.json } : {}),
+    ...(opts.junit !== undefined ? { junit: opts.junit } : {}),
     ...(opts.browser ? { browser: opts.browser } : {}),
     ...(comparison ? { comparison } : {}),
     paper: opts.paper,
@@ -201,8 +212,9 @@ async function reportCheck(outcome: CheckOutcome, context: ReportContext, io: Io
   };
   await writeAndTell(outcome, request, io);
   if (stream) {
-    stream.finish(outcome.results.summary);
-    io.out(`wrote JSON ${stream.path}`);
+    const file = stream;
+    await whileCleaningUpOnSignals(io, () => file.finish(outcome.results.summary));
+    io.out(`wrote JSON ${file.path}`);
   }
 
   const s = outcome.results.summary;
@@ -211,9 +223,48 @@ async function reportCheck(outcome: CheckOutcome, context: ReportContext, io: Io
 }
 
 async function writeAndTell(outcome: CheckOutcome, request: OutputRequest, io: Io): Promise<void> {
-  const artifacts = await renderOutputs(outcome, request);
-  await writeArtifacts(artifacts);
+  const artifacts = await whileCleaningUpOnSignals(io, async () => {
+    const rendered = await renderOutputs(outcome, request);
+    await writeArtifacts(rendered);
+    return rendered;
+  });
   for (const a of artifacts) io.out(`wrote ${a.kind.toUpperCase()} ${a.path}`);
+}
+
+/**
+ * While outputs are rendered and written (the asynchronous part of a run, when a signal is
+ * handled at once), SIGINT or SIGTERM removes this run's temporary files before it stops; a
+ * set of outputs being put in place is completed first. A run stopped while it checks the
+ * conditions leaves at most one temporary results file, named so that the next run writing
+ * that output removes it (write-atomic.ts).
+ */
+async function whileCleaningUpOnSignals<T>(io: Io, work: () => Promise<T>): Promise<T> {
+  const onSignal = (signal: NodeJS.Signals) => {
+    const code = 128 + (signal === 'SIGINT' ? 2 : 15);
+    const stop = (after: string) => () => {
+      io.err(`modalgate: stopped by ${signal}; ${after}`);
+      process.exit(code);
+    };
+    if (removeLiveTemporaries(stop('the outputs being put in place were completed first'))) stop('no output was changed')();
+  };
+  process.on('SIGINT', onSignal);
+  process.on('SIGTERM', onSignal);
+  try {
+    return await work();
+  } finally {
+    process.off('SIGINT', onSignal);
+    process.off('SIGTERM', onSignal);
+  }
+}
+
+/** The outputs a check writes, by option; with none named, the HTML report beside the model. */
+function outputPaths(modelPath: string, opts: CheckCommandOptions): OutputPath[] {
+  const named: OutputPath[] = [];
+  for (const option of ['html', 'pdf', 'json', 'junit'] as const) {
+    const path = opts[option];
+    if (path !== undefined) named.push({ option: `--${option}`, path });
+  }
+  return named.length > 0 ? named : [{ option: '--html', path: defaultHtmlPath(modelPath) }];
 }
 
 function runContext(argv: string[], io: Io) {
@@ -237,6 +288,11 @@ function collect(value: string, previous: string[]): string[] {
 function reportError(err: unknown, io: Io): number {
   if (err instanceof CommanderError) {
     if (err.code === 'commander.helpDisplayed' || err.code === 'commander.version' || err.code === 'commander.help') return EXIT.ok;
+    return EXIT.badInput;
+  }
+  if (err instanceof OutputSetError) {
+    io.err(err.message);
+    io.err(`modalgate: ${err.issues.length} problem(s) writing the outputs; these were written and could not be put back: ${err.written.join(', ')}`);
     return EXIT.badInput;
   }
   if (err instanceof InputError) {

@@ -1,6 +1,7 @@
 /**
  * Render every requested output in memory first, then write them all under temporary names
- * and rename: a run that fails while rendering leaves every earlier report as it was.
+ * and put them in place as one set: a run that fails while rendering or writing leaves every
+ * earlier report as it was.
  */
 import { createHash } from 'node:crypto';
 import type { CheckOutcome } from './check.js';
@@ -12,7 +13,8 @@ import { InputError, InternalError, type InputIssue } from './errors.js';
 import { outputError } from './report/output-error.js';
 import { resultsJsonChunks } from './report/json.js';
 import { renderJunit } from './report/junit.js';
-import { writeFileAtomic, type Chunks } from './report/write-atomic.js';
+import { commitFiles, discardPrepared, prepareFile, realTarget, targetKind, type Chunks, type PreparedFile } from './report/write-atomic.js';
+import type { InputFile } from './types.js';
 
 export interface OutputRequest {
   html?: string;
@@ -75,27 +77,78 @@ export async function renderOutputs(outcome: CheckOutcome, request: OutputReques
   return artifacts;
 }
 
+/** An output the command line was asked for: the option that names it and the path given. */
+export interface OutputPath {
+  option: string;
+  path: string;
+}
+
 /**
- * Fail before any work when an output cannot be written where it is asked for (a missing
- * folder, no permission, a folder of that name): a long sweep should not run first, and one
- * report must not be written when the next one then cannot be.
+ * Fail before any work when an output cannot be written where it is asked for (an empty path,
+ * a missing folder, no permission, a folder, FIFO or socket of that name) or when two outputs
+ * name the same file: a long sweep should not run first, and one report must not be written
+ * when the next one then cannot be.
  */
-export async function checkOutputPaths(paths: readonly string[]): Promise<void> {
+export async function checkOutputPaths(outputs: readonly OutputPath[]): Promise<void> {
   const issues: InputIssue[] = [];
-  for (const path of paths) {
+  const seen = new Map<string, OutputPath>();
+  for (const output of outputs) {
+    const { option, path } = output;
+    if (path.trim() === '') {
+      issues.push({ file: '(command line)', field: option, message: 'the output path is empty', expected: 'a file name', found: JSON.stringify(path), code: 'output_path' });
+      continue;
+    }
+    const target = realTarget(path);
+    const first = seen.get(target);
+    if (first) {
+      issues.push({ file: path, field: option, message: `the same file is also named by ${first.option}; each output needs a file of its own`, expected: 'a path no other output uses', found: first.path, code: 'output_twice' });
+      continue;
+    }
+    seen.set(target, output);
     try {
-      await access(dirname(path), constants.W_OK);
-      const existing = await stat(path).catch(() => undefined);
-      if (existing?.isDirectory()) throw Object.assign(new Error('is a directory'), { code: 'EISDIR' });
+      await access(dirname(target), constants.W_OK);
+      const kind = targetKind(target);
+      if (kind === 'other') {
+        const isFolder = (await stat(target)).isDirectory();
+        throw Object.assign(new Error('in the way'), { code: isFolder ? 'EISDIR' : 'MG_NOT_REGULAR' });
+      }
     } catch (err) {
       const mapped = outputError(path, err);
       if (!(mapped instanceof InputError)) throw mapped;
-      issues.push(...mapped.issues);
+      issues.push(...mapped.issues.map((i) => ({ ...i, field: option })));
     }
   }
   if (issues.length > 0) throw new InputError(issues);
 }
 
+/**
+ * No output may overwrite an input of the run (model, condition table, criteria file, baseline),
+ * compared by real path so that another spelling or a link to the same file is caught too.
+ */
+export function checkOutputsAreNotInputs(outputs: readonly OutputPath[], inputs: readonly InputFile[]): void {
+  const byTarget = new Map(inputs.map((i) => [realTarget(i.path), i]));
+  const issues: InputIssue[] = [];
+  for (const { option, path } of outputs) {
+    const input = byTarget.get(realTarget(path));
+    if (!input) continue;
+    const what = input.role === 'table' ? 'condition table' : `${input.role} file`;
+    issues.push({ file: path, field: option, message: `this output would overwrite the ${what} ${input.path}; choose another path`, expected: 'a path that is not an input', found: input.path, code: 'output_is_input' });
+  }
+  if (issues.length > 0) throw new InputError(issues);
+}
+
+/**
+ * Write every artifact as one set: each is written in full under a temporary name first, then
+ * all are put in place together (write-atomic.ts), so a failure leaves every earlier output as
+ * it was, or names exactly the ones that were replaced.
+ */
 export async function writeArtifacts(artifacts: Artifact[]): Promise<void> {
-  for (const a of artifacts) await writeFileAtomic(a.path, a.data);
+  const prepared: PreparedFile[] = [];
+  try {
+    for (const a of artifacts) prepared.push(await prepareFile(a.path, a.data));
+  } catch (err) {
+    discardPrepared(prepared);
+    throw err;
+  }
+  await commitFiles(prepared);
 }

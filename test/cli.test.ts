@@ -115,7 +115,7 @@ describe('modalgate check', () => {
     const html = path.join(dir, 'no-such-folder', 'r.html');
     const r = await run('check', sample, '--json', json, '--html', html);
     expect(r.code).toBe(2);
-    expect(r.err).toContain(`${html}: output: cannot write the output file: its folder does not exist (expected a file that can be written, found ENOENT) [output_unwritable]`);
+    expect(r.err).toContain(`${html}: --html: cannot write the output file: its folder does not exist (expected a file that can be written, found ENOENT) [output_unwritable]`);
     expect(r.out).not.toMatch(/summary:/); // nothing was checked
     expect(existsSync(json)).toBe(false);
     const folder = await run('check', sample, '--json', dir);

@@ -14,12 +14,15 @@ const REASONS: Record<string, string> = {
   ENOSPC: 'the disk is full',
   EDQUOT: 'the disk quota is used up',
   EISDIR: 'a folder of that name is in the way',
+  EFBIG: 'the file is too large for the file system',
+  ETXTBSY: 'the file is in use',
+  MG_NOT_REGULAR: 'it is not a regular file (a FIFO, socket or block device): only regular files and character devices such as /dev/null are written',
 };
 
 export function outputError(path: string, err: unknown): unknown {
   const code = (err as NodeJS.ErrnoException | null)?.code;
   if (code === undefined || !(code in REASONS)) return err;
   return new InputError([
-    { file: path, field: 'output', message: `cannot write the output file: ${REASONS[code]}`, expected: 'a file that can be written', found: code, code: 'output_unwritable' },
+    { file: path, field: 'output', message: `cannot write the output file: ${REASONS[code]}`, expected: 'a file that can be written', found: code === 'MG_NOT_REGULAR' ? 'not a regular file' : code, code: 'output_unwritable' },
   ]);
 }

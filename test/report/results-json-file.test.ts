@@ -40,18 +40,18 @@ function conditionJsonLength(results: CheckOutcome['results']): number {
 const leftovers = () => readdirSync(dir).filter((name) => name.endsWith('.tmp'));
 
 describe('ResultsJsonFile', () => {
-  it('writes exactly the bytes of the finished-results writer, summary included', () => {
+  it('writes exactly the bytes of the finished-results writer, summary included', async () => {
     const path = join(dir, 'streamed.json');
     const file = ResultsJsonFile.open(path, headOf(outcome));
     for (const c of outcome.results.conditions) file.add(c);
     expect(existsSync(path)).toBe(false); // nothing in place until it is finished
-    file.finish(outcome.results.summary);
+    await file.finish(outcome.results.summary);
     expect(readFileSync(path, 'utf8')).toBe(renderResultsJson(outcome.results));
     expect(JSON.parse(readFileSync(path, 'utf8')).summary).toEqual(outcome.results.summary);
     expect(leftovers()).toEqual([]);
   });
 
-  it('writes the same bytes whatever the buffer size, lines longer than the buffer and non-ASCII text included', () => {
+  it('writes the same bytes whatever the buffer size, lines longer than the buffer and non-ASCII text included', async () => {
     // ids in 2-, 3- and 4-byte UTF-8, so that a line's byte length is well above its length
     const conditions = outcome.results.conditions.map((c, i) => (i % 2 === 1 ? { ...c, id: `${c.id}-${'Ünï—✓-𝛼'.repeat(200)}` } : c));
     const results = { ...outcome.results, conditions };
@@ -61,7 +61,7 @@ describe('ResultsJsonFile', () => {
       const path = join(dir, `buffer-${bufferBytes}.json`);
       const file = ResultsJsonFile.open(path, headOf(outcome), bufferBytes);
       for (const c of conditions) file.add(c);
-      file.finish(results.summary);
+      await file.finish(results.summary);
       expect(readFileSync(path, 'utf8'), `buffer of ${bufferBytes} bytes`).toBe(expected);
     }
     expect(leftovers()).toEqual([]);
