@@ -15,6 +15,8 @@ export interface CheckRequest {
   model: string;
   /** criteria set paths or shipped ids; empty = modes only */
   criteria: string[];
+  /** folders besides the model's own whose files the model may name (e.g. a condition table) */
+  trustedFolders?: string[];
   /** tool version, the command line and the run time, supplied by the caller (no clock here) */
   toolVersion: string;
   command: string[];
@@ -52,7 +54,7 @@ export interface CheckOutcome {
 }
 
 export async function runCheck(request: CheckRequest): Promise<CheckOutcome> {
-  const { model, files: modelFiles } = await loadModel(request.model);
+  const { model, files: modelFiles } = await loadModel(request.model, { trustedFolders: request.trustedFolders ?? [] });
   const loaded = await Promise.all(request.criteria.map((ref) => loadCriteriaSet(ref)));
   const sets = loaded.map((l) => l.set);
 

@@ -18,7 +18,7 @@ import { parseBaselineResults } from './compare/compare-results.js';
 import { formatCriteriaSetText } from './report/criteria-text.js';
 import { InputError } from './errors.js';
 import { loadCriteriaSet } from './load/criteria-file.js';
-import { readInputFile } from './load/read-file.js';
+import { BASELINE_LIMIT_BYTES, readInputFile } from './load/read-file.js';
 import { checkOutputPaths, checkOutputsAreNotInputs, renderOutputs, writeArtifacts, type OutputPath, type OutputRequest } from './outputs.js';
 import { OutputSetError, removeLiveTemporaries } from './report/write-atomic.js';
 import { formatResultsText } from './report/terminal.js';
@@ -71,6 +71,7 @@ export async function main(argv: string[], io: Io = defaultIo()): Promise<number
     .addOption(new Option('--fail-on <verdict>', 'lowest verdict that makes the exit code 1').choices(['fail', 'marginal']).default('fail'))
     .addOption(new Option('--paper <size>', 'PDF paper size').choices(['A4', 'Letter']).default('A4'))
     .option('--browser <path>', 'Chromium or Chrome executable for the PDF')
+    .option('--trust-folder <folder>', 'a folder besides the model\'s own whose files the model may name (repeatable)', collect, [])
     .addOption(new Option('--detail <which>', 'per-condition detail: all, issues (conditions with a fail, marginal or not-evaluated finding) or none').choices(['all', 'issues', 'none']))
     .action(async (modelPath: string, opts: CheckCommandOptions) => {
       exitCode = await checkCommand(modelPath, opts, argv, io);
@@ -81,12 +82,14 @@ export async function main(argv: string[], io: Io = defaultIo()): Promise<number
     .description('identify the modes and print their figures (no criteria)')
     .argument('<model>', 'model file (modalgate-model/1, YAML or JSON)')
     .option('--json <file>', 'write results JSON (modes only, no findings)')
-    .action(async (modelPath: string, opts: { json?: string }) => {
+    .option('--trust-folder <folder>', 'a folder besides the model\'s own whose files the model may name (repeatable)', collect, [])
+    .action(async (modelPath: string, opts: { json?: string; trustFolder: string[] }) => {
       const outputs: OutputPath[] = opts.json !== undefined ? [{ option: '--json', path: opts.json }] : [];
       await checkOutputPaths(outputs);
       const outcome = await runCheck({
         model: modelPath,
         criteria: [],
+        trustedFolders: opts.trustFolder,
         ...runContext(argv, io),
         onStart: (head) => checkOutputsAreNotInputs(outputs, head.inputs),
       });
@@ -134,6 +137,7 @@ interface CheckCommandOptions {
   paper: 'A4' | 'Letter';
   browser?: string;
   detail?: 'all' | 'issues' | 'none';
+  trustFolder: string[];
 }
 
 async function checkCommand(modelPath: string, opts: CheckCommandOptions, argv: string[], io: Io): Promise<number> {
@@ -142,7 +146,7 @@ async function checkCommand(modelPath: string, opts: CheckCommandOptions, argv: 
   // Read the baseline and check the outputs (the default report too) before any work, so that
   // a bad baseline or an output that cannot be written is reported at once; once the model
   // and criteria are read, no output may be one of them.
-  const baseline = opts.baseline !== undefined ? await readInputFile(opts.baseline) : undefined;
+  const baseline = opts.baseline !== undefined ? await readInputFile(opts.baseline, { limitBytes: BASELINE_LIMIT_BYTES }) : undefined;
   const outputs = outputPaths(modelPath, opts);
   await checkOutputPaths(outputs);
   const baselineInput = baseline ? [{ role: 'baseline' as const, path: baseline.path, sha256: baseline.sha256 }] : [];
@@ -157,6 +161,7 @@ async function checkCommand(modelPath: string, opts: CheckCommandOptions, argv: 
     const outcome = await runCheck({
       model: modelPath,
       criteria,
+      trustedFolders: opts.trustFolder,
       ...runContext(argv, io),
       onProgress: progress.onProgress,
       onStart: (head: ResultsHead, total: number) => {

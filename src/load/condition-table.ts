@@ -109,7 +109,8 @@ export function readConditionTable(spec: ConditionTableSpec, table: { path: stri
   }
   const missing = targets.filter((t) => !headerIndex.has(t.header));
   for (const t of missing) {
-    issues.push(at(head.line, undefined, t.field, { message: `column '${t.header}' is not in the header`, expected: JSON.stringify(t.header), found: [...headerIndex.keys()].join(', ') || 'no headers', code: 'missing_column' }));
+    // placed at the mapping that names it; the table's header is not echoed (it may not be a table at all)
+    problems.push({ path: ['conditionTable', 'columns', t.field], message: `column '${t.header}' is not in the header of ${file}`, expected: `a column headed ${JSON.stringify(t.header)}`, found: `${headerIndex.size} other column(s)`, code: 'missing_column' });
   }
   (spec.ignore ?? []).forEach((name, i) => {
     if (!headerIndex.has(name)) {

@@ -4,7 +4,6 @@
  * and column), then hands the chain, root first, to the pure resolver.
  */
 import { existsSync, readdirSync } from 'node:fs';
-import { readFile } from 'node:fs/promises';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { InputError, type InputIssue } from '../errors.js';
@@ -12,7 +11,7 @@ import type { ParsedCriteriaFile } from '../criteria/parsed-criteria-file.js';
 import { resolveCriteriaChain } from '../criteria/resolve.js';
 import type { Place, ResolvedCriteriaSet } from '../types.js';
 import { criteriaFileSchema } from './criteria-schema.js';
-import { sha256Hex } from './read-file.js';
+import { readRegularFile, sha256Hex, UnreadableFile, withoutByteOrderMark } from './read-file.js';
 import { parseStructuredText } from './structured-text.js';
 import { issuesFromZod } from './zod-issues.js';
 
@@ -40,13 +39,14 @@ export async function loadCriteriaSet(ref: string): Promise<LoadedCriteriaSet> {
       break;
     }
     seen.set(absolute, shown);
-    const text = await readText(absolute, shown, extendsAt);
+    const bytes = await readBytes(absolute, shown, extendsAt);
+    const text = withoutByteOrderMark(bytes.toString('utf8'));
     const source = parseStructuredText(text, shown);
     const checked = criteriaFileSchema.safeParse(source.value);
     // A file with schema problems is still followed up its chain, so that one run reports all.
     let parent: unknown;
     if (checked.success) {
-      chain.unshift({ parsed: { file: shown, data: checked.data, locate: source.locate }, sha256: sha256Hex(text) });
+      chain.unshift({ parsed: { file: shown, data: checked.data, locate: source.locate }, sha256: sha256Hex(bytes) });
       parent = checked.data.extends;
     } else {
       issues.push(...issuesFromZod(checked.error, source));
@@ -110,12 +110,12 @@ function shippedIds(): string[] {
   }
 }
 
-async function readText(absolute: string, shown: string, referencedAt: Place | undefined): Promise<string> {
+async function readBytes(absolute: string, shown: string, referencedAt: Place | undefined): Promise<Buffer> {
   try {
-    return await readFile(absolute, 'utf8');
+    return await readRegularFile(absolute);
   } catch (err) {
-    const code = (err as NodeJS.ErrnoException).code;
-    const reason = code === 'ENOENT' ? 'no such file' : `cannot read the file (${code ?? (err as Error).message})`;
+    if (!(err instanceof UnreadableFile)) throw err;
+    const reason = err.reason === 'file not found' ? 'no such file' : `the file ${err.reason}`;
     const shipped = referencedAt === undefined ? ` (shipped sets: ${shippedIds().join(', ')})` : '';
     throw new InputError([
       { ...(referencedAt ?? { file: shown }), field: referencedAt ? 'extends' : '', message: `${reason}: ${shown}${shipped}`, code: 'unreadable' },

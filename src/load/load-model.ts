@@ -1,9 +1,15 @@
 /**
  * Read a model file and the condition table it names (I/O), then parse them with the pure
  * parseModel. Every file read is returned with its SHA-256, for the results' inputs.
+ *
+ * A model file cannot pull other files into a report: the table it names must lie, by real
+ * path (links followed), inside the model's own folder or one of the folders the caller
+ * trusts (the command line's --trust-folder); a problem reading it is reported at the model's
+ * `conditionTable.file`, never with the content of what was reached.
  */
-import { dirname, isAbsolute, join } from 'node:path';
-import { InputError } from '../errors.js';
+import { realpathSync } from 'node:fs';
+import { dirname, isAbsolute, join, relative, sep } from 'node:path';
+import { InputError, type InputIssue } from '../errors.js';
 import type { AircraftModel } from '../types.js';
 import { parseModel, type TableText } from './model-file.js';
 import { readInputFile } from './read-file.js';
@@ -14,32 +20,74 @@ export interface LoadedModel {
   files: { role: 'model' | 'table'; path: string; sha256: string }[];
 }
 
-export async function loadModel(path: string): Promise<LoadedModel> {
+export interface LoadOptions {
+  /** folders besides the model's own whose files the model may name */
+  trustedFolders?: readonly string[];
+}
+
+export async function loadModel(path: string, options: LoadOptions = {}): Promise<LoadedModel> {
   const modelFile = await readInputFile(path);
   const files: LoadedModel['files'] = [{ role: 'model', path: modelFile.path, sha256: modelFile.sha256 }];
   const tables: Record<string, TableText> = {};
   const ref = tableReference(modelFile.text, modelFile.path);
   if (ref !== undefined) {
     // Relative to the model file, shown the way the model file's own path was given.
-    const tablePath = isAbsolute(ref) ? ref : join(dirname(modelFile.path), ref);
-    const table = await readInputFile(tablePath);
-    tables[ref] = { path: table.path, text: table.text };
+    const tablePath = isAbsolute(ref.file) ? ref.file : join(dirname(modelFile.path), ref.file);
+    const namedAt = { file: modelFile.path, ...ref.place, field: 'conditionTable.file' };
+    checkContained(tablePath, modelFile.path, options.trustedFolders ?? [], namedAt);
+    const table = await readInputFile(tablePath, { namedAt, what: 'condition table' });
+    tables[ref.file] = { path: table.path, text: table.text };
     files.push({ role: 'table', path: table.path, sha256: table.sha256 });
   }
   return { model: parseModel(modelFile.text, modelFile.path, tables), files };
 }
 
+/** Whether `path` lies, by real path, inside `folder` (itself by real path). */
+export function isInside(path: string, folder: string): boolean {
+  const rel = relative(realOrSelf(folder), realOrSelf(path));
+  return rel !== '' && !rel.startsWith(`..${sep}`) && rel !== '..' && !isAbsolute(rel);
+}
+
+function checkContained(tablePath: string, modelPath: string, trusted: readonly string[], namedAt: Omit<InputIssue, 'message' | 'code'>): void {
+  const modelFolder = dirname(modelPath);
+  if ([modelFolder, ...trusted].some((folder) => isInside(tablePath, folder))) return;
+  throw new InputError([
+    {
+      ...namedAt,
+      message: `the condition table ${tablePath} lies outside the model's folder ${realOrSelf(modelFolder)}; a model may name only files inside its folder (--trust-folder <folder> allows another)`,
+      expected: 'a path inside the model\'s folder',
+      found: JSON.stringify(tablePath),
+      code: 'outside_folder',
+    },
+  ]);
+}
+
+/** The real path (links followed) of an existing file or folder; of a missing one, its folder's real path and its name. */
+function realOrSelf(path: string): string {
+  try {
+    return realpathSync(path);
+  } catch {
+    try {
+      return join(realpathSync(dirname(path)), path.slice(dirname(path).length + 1));
+    } catch {
+      return path;
+    }
+  }
+}
+
 /**
- * The table file the model names, if any. The model is parsed here only when it mentions a
- * table at all (a large JSON sweep is not parsed twice); a broken file is left to parseModel,
- * which reports it properly.
+ * The table file the model names, if any, with its place. The model is parsed here only when
+ * it mentions a table at all (a large JSON sweep is not parsed twice); a broken file is left
+ * to parseModel, which reports it properly.
  */
-function tableReference(text: string, file: string): string | undefined {
+function tableReference(text: string, file: string): { file: string; place: { line?: number; column?: number } } | undefined {
   if (!text.includes('conditionTable')) return undefined;
   try {
-    const value = parseStructuredText(text, file).value as { conditionTable?: { file?: unknown } } | null;
+    const source = parseStructuredText(text, file);
+    const value = source.value as { conditionTable?: { file?: unknown } } | null;
     const ref = value?.conditionTable?.file;
-    return typeof ref === 'string' && ref !== '' ? ref : undefined;
+    if (typeof ref !== 'string' || ref === '') return undefined;
+    return { file: ref, place: source.locate(['conditionTable', 'file']) ?? {} };
   } catch (err) {
     if (err instanceof InputError) return undefined;
     throw err;

@@ -61,11 +61,11 @@ describe('loadModel', () => {
     expect(loaded.model.conditions[0]!.place).toEqual({ file: join(root, 'models/sweeps/s.csv'), line: 2 });
   });
 
-  it('reports a missing table by its path', async () => {
+  it('reports a missing table at the model\'s conditionTable.file, with its path', async () => {
     const root = scratch({ 'm.yaml': model('absent.csv') });
     const err = await loadModel(join(root, 'm.yaml')).catch((e: unknown) => e);
     expect(err).toBeInstanceOf(InputError);
-    expect((err as InputError).message).toBe(`${join(root, 'absent.csv')}: file not found [unreadable]`);
+    expect((err as InputError).message).toBe(`${join(root, 'm.yaml')}:5:9: conditionTable.file: the condition table ${join(root, 'absent.csv')} was not found [unreadable]`);
   });
 
   it('reads a model without a table as before (one file)', async () => {
