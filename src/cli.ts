@@ -23,6 +23,7 @@ import { checkOutputPaths, checkOutputsAreNotInputs, renderOutputs, writeArtifac
 import { OutputSetError, removeLiveTemporaries } from './report/write-atomic.js';
 import { formatResultsText } from './report/terminal.js';
 import { progressReporter } from './progress.js';
+import { visible, visibleLines } from './visible-text.js';
 
 export const DEFAULT_CRITERIA = 'mil-f-8785c';
 
@@ -55,7 +56,7 @@ export async function main(argv: string[], io: Io = defaultIo()): Promise<number
     .description('Check an aircraft linear model\'s dynamic modes against handling-qualities criteria.')
     .version(toolVersion())
     .exitOverride()
-    .configureOutput({ writeOut: (s) => io.out(s.trimEnd()), writeErr: (s) => io.err(s.trimEnd()) })
+    .configureOutput({ writeOut: (s) => io.out(visibleLines(s.trimEnd())), writeErr: (s) => io.err(visibleLines(s.trimEnd())) })
     .showHelpAfterError();
 
   program
@@ -112,7 +113,7 @@ export async function main(argv: string[], io: Io = defaultIo()): Promise<number
     .description('validate a criteria file and its extends chain')
     .action(async (file: string) => {
       const { set, files } = await loadCriteriaSet(file);
-      io.out(`${file}: valid; set ${set.id} (${set.chain.join(' > ')}), ${set.criteria.length} criteria, ${set.dropped.length} dropped, ${files.length} file(s)`);
+      io.out(visible(`${file}: valid; set ${set.id} (${set.chain.join(' > ')}), ${set.criteria.length} criteria, ${set.dropped.length} dropped, ${files.length} file(s)`));
     });
 
   try {
@@ -219,7 +220,7 @@ async function reportCheck(outcome: CheckOutcome, context: ReportContext, io: Io
   if (stream) {
     const file = stream;
     await whileCleaningUpOnSignals(io, () => file.finish(outcome.results.summary));
-    io.out(`wrote JSON ${file.path}`);
+    io.out(`wrote JSON ${visible(file.path)}`);
   }
 
   const s = outcome.results.summary;
@@ -233,7 +234,7 @@ async function writeAndTell(outcome: CheckOutcome, request: OutputRequest, io: I
     await writeArtifacts(rendered);
     return rendered;
   });
-  for (const a of artifacts) io.out(`wrote ${a.kind.toUpperCase()} ${a.path}`);
+  for (const a of artifacts) io.out(`wrote ${a.kind.toUpperCase()} ${visible(a.path)}`);
 }
 
 /**
@@ -297,7 +298,7 @@ function reportError(err: unknown, io: Io): number {
   }
   if (err instanceof OutputSetError) {
     io.err(err.message);
-    io.err(`modalgate: ${err.issues.length} problem(s) writing the outputs; these were written and could not be put back: ${err.written.join(', ')}`);
+    io.err(`modalgate: ${err.issues.length} problem(s) writing the outputs; these were written and could not be put back: ${err.written.map(visible).join(', ')}`);
     return EXIT.badInput;
   }
   if (err instanceof InputError) {
@@ -306,7 +307,7 @@ function reportError(err: unknown, io: Io): number {
     return EXIT.badInput;
   }
   const e = err as Error;
-  io.err(`modalgate: internal error: ${e?.stack ?? String(err)}`);
+  io.err(`modalgate: internal error: ${visibleLines(e?.stack ?? String(err))}`);
   io.err('this is a bug in modalgate; nothing was written');
   return EXIT.internal;
 }

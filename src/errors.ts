@@ -3,6 +3,7 @@
  * problem found in one pass; an InternalError is a broken invariant, i.e. a bug in modalgate
  * (exit code 3).
  */
+import { visible } from './visible-text.js';
 
 export interface InputIssue {
   /** file the problem is in (as the user named it) */
@@ -52,15 +53,19 @@ export function dedupeIssues(issues: InputIssue[]): InputIssue[] {
   });
 }
 
-/** `file:line:col: field: message (expected X, found Y) [code]` */
+/**
+ * `file:line:col: field: message (expected X, found Y) [code]`, on one line: every part may
+ * hold text from the user's files, so each is made visible (visible-text.ts) and none can
+ * break the line or act on the terminal.
+ */
 export function formatIssue(issue: InputIssue): string {
-  const place = [issue.file, issue.line, issue.column].filter((p) => p !== undefined).join(':');
-  const field = issue.field ? `${issue.field}: ` : '';
+  const place = [visible(issue.file), issue.line, issue.column].filter((p) => p !== undefined).join(':');
+  const field = issue.field ? `${visible(issue.field)}: ` : '';
   const parts: string[] = [];
-  if (issue.expected !== undefined) parts.push(`expected ${issue.expected}`);
-  if (issue.found !== undefined) parts.push(`found ${issue.found}`);
+  if (issue.expected !== undefined) parts.push(`expected ${visible(issue.expected)}`);
+  if (issue.found !== undefined) parts.push(`found ${visible(issue.found)}`);
   const detail = parts.length > 0 ? ` (${parts.join(', ')})` : '';
-  return `${place}: ${field}${issue.message}${detail} [${issue.code}]`;
+  return `${place}: ${field}${visible(issue.message)}${detail} [${visible(issue.code)}]`;
 }
 
 /** Render a field path the way a user reads it: `conditions[2].A[1][0]`. */

@@ -8,6 +8,7 @@ import type { Comparison, FindingChange, ModeFigureChange } from './compare-resu
 import type { FigureChange } from './figure-change.js';
 import { modeChangeItems, stabilityChangeText, type ModeFigure } from './mode-change-items.js';
 import type { InputChange } from './input-changes.js';
+import { visibleData } from '../visible-text.js';
 
 /** Rows shown per list; a 10,000-condition sweep would otherwise flood the terminal. */
 const listLimit = 25;
@@ -15,7 +16,9 @@ const modeLimit = 10;
 
 const ansi = { red: '31', green: '32', yellow: '33', bold: '1', dim: '2' } as const;
 
-export function formatComparisonText(c: Comparison, options: { color: boolean }): string {
+/** Strings from the files compared are made visible first (visible-text.ts). */
+export function formatComparisonText(written: Comparison, options: { color: boolean }): string {
+  const c = visibleData(written);
   const paint = (code: keyof typeof ansi, text: string) => (options.color ? `\u001b[${ansi[code]}m${text}\u001b[0m` : text);
   const lines: string[] = [];
   const when = c.baseline.generatedAt ? `, run ${c.baseline.generatedAt}` : '';

@@ -2,8 +2,11 @@
 import type { Bound, ResolvedCriteriaSet } from '../types.js';
 import { formatSig } from './format-number.js';
 import { textTable } from './text-table.js';
+import { visibleData } from '../visible-text.js';
 
-export function formatCriteriaSetText(set: ResolvedCriteriaSet): string {
+/** Strings from the criteria files are made visible first (visible-text.ts). */
+export function formatCriteriaSetText(written: ResolvedCriteriaSet): string {
+  const set = visibleData(written);
   const out: string[] = [];
   out.push(`${set.id}: ${set.title}`);
   out.push(`chain: ${set.chain.join(' > ')}`);

@@ -11,6 +11,7 @@ import { formatEigenvalues, formatSig } from './format-number.js';
 import { MODE_TEXT, QUANTITY_TEXT } from './labels.js';
 import { levelReachedWords, modeLevel, modeLevelWords } from './mode-levels.js';
 import { textTable } from './text-table.js';
+import { visibleData } from '../visible-text.js';
 
 export interface TerminalOptions {
   color: boolean;
@@ -42,7 +43,13 @@ export function verdictText(verdict: Verdict): string {
   return VERDICT_TEXT[verdict];
 }
 
-export function formatResultsText(results: Results, options: TerminalOptions): string {
+/**
+ * Every string from the user's files (names, ids, notes, warnings, sources) is made visible
+ * before it is laid out (visible-text.ts): the only escape sequences in the text are the
+ * colours added here.
+ */
+export function formatResultsText(written: Results, options: TerminalOptions): string {
+  const results = { ...written, ...visibleData({ tool: written.tool, aircraft: written.aircraft, criteriaSets: written.criteriaSets }) };
   const paint = (code: string, text: string) => (options.color ? `${code}${text}\u001b[0m` : text);
   const out: string[] = [];
   out.push(paint('\u001b[1m', `modalgate ${results.tool.version}: ${results.aircraft.name} (Class ${results.aircraft.class})`));
@@ -55,7 +62,8 @@ export function formatResultsText(results: Results, options: TerminalOptions): s
   // findings that are not a pass; the full tables are in the report and the JSON.
   const compact = options.detail === 'issues';
   const listed = compact ? shown.slice(0, MAX_LISTED_CONDITIONS) : shown;
-  for (const c of listed) {
+  for (const raw of listed) {
+    const c = visibleData(raw);
     out.push('');
     out.push(paint('\u001b[1m', conditionHeading(c)));
     if (compact) {
