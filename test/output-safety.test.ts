@@ -9,7 +9,7 @@ import { copyFileSync, existsSync, lstatSync, mkdirSync, mkdtempSync, readdirSyn
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { main } from '../src/cli.js';
+import { runCli } from './run-cli.js';
 import { commitFiles, newTemporary, prepareFile, removeLiveTemporaries, writeFileAtomic } from '../src/report/write-atomic.js';
 import { writeArtifacts } from '../src/outputs.js';
 
@@ -17,12 +17,7 @@ const root = path.resolve(import.meta.dirname, '..');
 const sample = path.join(root, 'samples/ketra-kt4.yaml');
 const envelope = path.join(root, 'samples/ketra-kt4-envelope.yaml');
 
-async function run(...argv: string[]) {
-  const out: string[] = [];
-  const err: string[] = [];
-  const code = await main(argv, { out: (t) => out.push(t), err: (t) => err.push(t), color: false, now: () => new Date('2026-12-01T12:00:00Z') });
-  return { code, out: out.join('\n'), err: err.join('\n') };
-}
+const run = runCli;
 
 function scratch(): string {
   return mkdtempSync(path.join(tmpdir(), 'modalgate-outputs-'));

@@ -7,19 +7,14 @@ import { copyFileSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs'
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { main } from '../src/cli.js';
+import { runCli } from './run-cli.js';
 import { formatIssue } from '../src/errors.js';
 import { visible, visibleData } from '../src/visible-text.js';
 
 const root = path.resolve(import.meta.dirname, '..');
 const marginalOnly = path.join(root, 'test/fixtures/cli/marginal-only.yaml');
 
-async function run(...argv: string[]) {
-  const out: string[] = [];
-  const err: string[] = [];
-  const code = await main(argv, { out: (t) => out.push(t), err: (t) => err.push(t), color: false, now: () => new Date('2026-12-01T12:00:00Z') });
-  return { code, out: out.join('\n'), err: err.join('\n') };
-}
+const run = runCli;
 
 /** Anything a terminal would act on: C0 (but for the line breaks between lines), DEL, C1, bidi controls. */
 // The pattern is the list the issue names; a line break is allowed only between whole lines.
