@@ -76,7 +76,7 @@ export function resultsHead(parts: ResultsParts): ResultsHead {
     command: parts.request.command,
     inputs: parts.inputs,
     aircraft: { ...parts.model.aircraft },
-    criteriaSets: parts.sets.map((s) => ({ id: s.id, title: s.title, chain: s.chain })),
+    criteriaSets: parts.sets.map((s) => ({ id: s.id, title: s.title, chain: s.chain, sources: s.sources })),
   };
 }
 

@@ -218,8 +218,11 @@ export interface Finding {
   margin: number | null;
   bounds: LevelBounds;
   source: string;
-  /** 'published' = value seen in the document; 'memory' = recalled, must be verified */
-  confidence: 'published' | 'memory';
+  /**
+   * where the boundary that decides the verdict (the required level's, with any adjustment
+   * applied) was read: its evidence class and the ids of the sources it cites
+   */
+  evidence: FindingEvidence;
   reason: string;
   /** how a derived figure was obtained (e.g. n/alpha method) */
   method?: string;
@@ -280,7 +283,7 @@ export interface Results {
   command: string[];
   inputs: InputFile[];
   aircraft: { name: string; class: AircraftClass };
-  criteriaSets: { id: string; title: string; chain: string[] }[];
+  criteriaSets: { id: string; title: string; chain: string[]; sources: SourceEntry[] }[];
   summary: VerdictCounts;
   conditions: ConditionResult[];
 }
@@ -290,7 +293,64 @@ export type ResultsHead = Omit<Results, 'summary' | 'conditions'>;
 
 // ---------------------------------------------------------------- criteria (resolved form)
 
-export type Confidence = 'published' | 'memory';
+/**
+ * How a boundary value is known:
+ * - published      read in the primary document (the standard or regulation itself), at a stated page or paragraph
+ * - secondary      read in a named reproduction (report, textbook reprint, notes quoting the document)
+ * - conflicting    the sources disagree; each is listed with its value, and the value kept is said
+ * - memory         recalled or inferred, not read in any text: verify before relying on it
+ * - programme-set  chosen by the programme (an override that states no evidence of its own)
+ */
+export type EvidenceClass = 'published' | 'secondary' | 'conflicting' | 'memory' | 'programme-set';
+
+/** One source cited for a boundary. */
+export interface Citation {
+  /** id of an entry of the set's source list */
+  source: string;
+  /** page, table, figure or paragraph of the source */
+  at?: string;
+  /** a short quote of the source */
+  quote?: string;
+  /** the value this source gives (required where the class is conflicting) [SI unit of the quantity] */
+  value?: number | string;
+}
+
+/** What is known of one boundary (one level, or a group of parameters). */
+export interface Evidence {
+  class: EvidenceClass;
+  cites: Citation[];
+  /** Markdown */
+  note: string;
+  /** the set that stated this evidence */
+  by: string;
+}
+
+/** The evidence of a finding's boundary, as the results carry it. */
+export interface FindingEvidence {
+  class: EvidenceClass;
+  /** ids of the sources cited */
+  sources: string[];
+}
+
+/** An entry of a criteria set's source list. */
+export interface SourceEntry {
+  id: string;
+  /**
+   * primary: the document itself; reproduction: a named text that quotes or reprints it;
+   * recollection: someone's memory of it, not a text
+   */
+  kind: 'primary' | 'reproduction' | 'recollection';
+  /** full citation */
+  title: string;
+  /** the document it reproduces or recalls, when it is not the document itself */
+  reproduces?: string;
+  /** where it can be found (address, library reference) */
+  where?: string;
+  /** Markdown */
+  note?: string;
+  /** the set that lists it */
+  set: string;
+}
 
 export interface ResolvedCriterion {
   id: string;
@@ -317,7 +377,10 @@ export interface ResolvedCriterion {
   params: Record<string, number | string | boolean>;
   /** document and paragraph */
   source: string;
-  confidence: Confidence;
+  /** what is known of each level's bounds (every level filled in; a level left out of `levels` takes the evidence of the level whose bounds it holds) */
+  evidence: Record<'1' | '2' | '3', Evidence>;
+  /** evidence of boundary values held in `params` (e.g. an adjustment rule), by parameter names */
+  paramEvidence: (Evidence & { params: string[] })[];
   /** Markdown */
   note: string;
 }
@@ -334,6 +397,8 @@ export interface ResolvedCriteriaSet {
   /** marginal band: fraction of the boundary, and the absolute band used where the boundary is 0 */
   marginalBand: { relative: number; absolute: Record<string, number> };
   criteria: ResolvedCriterion[];
+  /** the source list of every file of the chain, root first */
+  sources: SourceEntry[];
   dropped: { id: string; reason: string; by: string }[];
   /** Markdown notes of the set (all files of the chain, root first) */
   notes: string[];

@@ -11,6 +11,7 @@ import { InputError, type InputIssue } from '../errors.js';
 import { parseStructuredText } from '../load/structured-text.js';
 import { issuesFromZod } from '../load/zod-issues.js';
 import { countVerdicts } from '../results.js';
+import { evidenceClasses, sourceKinds } from '../load/criteria-schema.js';
 import type { ConditionResult, Finding, Mode, Results } from '../types.js';
 
 const modeKind = z.enum(['short_period', 'phugoid', 'dutch_roll', 'roll', 'spiral', 'roll_spiral', 'kinematic', 'other']);
@@ -50,6 +51,8 @@ const findingSchema = z.object({
   margin: figure,
   bounds: z.object({ '1': bound.optional(), '2': bound.optional(), '3': bound.optional() }).optional(),
   source: z.string().optional(),
+  evidence: z.object({ class: z.enum(evidenceClasses), sources: z.array(z.string()) }).optional(),
+  /** results written before evidence classes: 'published' | 'memory' */
   confidence: z.enum(['published', 'memory']).optional(),
   reason: z.string().optional(),
   method: z.string().optional(),
@@ -81,7 +84,28 @@ const resultsSchema = z.object({
   command: z.array(z.string()).optional(),
   inputs: z.array(z.object({ role: z.enum(['model', 'criteria', 'table', 'baseline']), path: z.string(), sha256: z.string() })),
   aircraft: z.object({ name: z.string(), class: z.enum(['I', 'II-L', 'II-C', 'III', 'IV']) }),
-  criteriaSets: z.array(z.object({ id: z.string(), title: z.string().optional(), chain: z.array(z.string()).optional() })).optional(),
+  criteriaSets: z
+    .array(
+      z.object({
+        id: z.string(),
+        title: z.string().optional(),
+        chain: z.array(z.string()).optional(),
+        sources: z
+          .array(
+            z.object({
+              id: z.string(),
+              kind: z.enum(sourceKinds),
+              title: z.string(),
+              reproduces: z.string().optional(),
+              where: z.string().optional(),
+              note: z.string().optional(),
+              set: z.string(),
+            }),
+          )
+          .optional(),
+      }),
+    )
+    .optional(),
   conditions: z.array(conditionSchema),
 });
 
@@ -125,7 +149,12 @@ export function parseBaselineResults(text: string, file: string): Results {
     command: written.command ?? [],
     inputs: written.inputs,
     aircraft: written.aircraft,
-    criteriaSets: (written.criteriaSets ?? []).map((s) => ({ id: s.id, title: s.title ?? '', chain: s.chain ?? [s.id] })),
+    criteriaSets: (written.criteriaSets ?? []).map((s) => ({
+      id: s.id,
+      title: s.title ?? '',
+      chain: s.chain ?? [s.id],
+      sources: (s.sources ?? []).map((x) => ({ ...x })),
+    })),
     summary,
     conditions,
   };
@@ -138,6 +167,7 @@ function toConditionResult(c: WrittenCondition): ConditionResult {
     missing.push(name);
     return standIn;
   };
+  const legacy = c.findings.some((f) => f.evidence === undefined);
   const findings: Finding[] = c.findings.map((f) => ({
     criterion: f.criterion,
     set: f.set ?? '',
@@ -151,11 +181,11 @@ function toConditionResult(c: WrittenCondition): ConditionResult {
     margin: f.margin,
     bounds: f.bounds ?? {},
     source: f.source ?? '',
-    // Unknown provenance is treated as the less trusted kind.
-    confidence: f.confidence ?? 'memory',
+    evidence: f.evidence ?? legacyEvidence(f.confidence),
     reason: f.reason ?? '',
     ...(f.method !== undefined ? { method: f.method } : {}),
   }));
+  if (legacy) missing.push('findings[].evidence (taken from `confidence`: published as secondary, otherwise memory)');
   const modes: Mode[] = c.modes.map((m) => ({
     kind: m.kind,
     eigenvalues: m.eigenvalues,
@@ -191,4 +221,13 @@ function toConditionResult(c: WrittenCondition): ConditionResult {
   };
   if (missing.length > 0) result.notes = [...result.notes, `baseline file gave no ${missing.join(', ')}: stand-ins used, not for display`];
   return result;
+}
+
+/**
+ * Results written before evidence classes carry `confidence`: its 'published' meant "read in a
+ * reproduction of the table", which is `secondary`; unknown provenance is `memory`, the least
+ * trusted class.
+ */
+function legacyEvidence(confidence: 'published' | 'memory' | undefined): Finding['evidence'] {
+  return { class: confidence === 'published' ? 'secondary' : 'memory', sources: [] };
 }

@@ -18,7 +18,8 @@ import type {
 } from '../types.js';
 import { flat } from '../flat-string.js';
 import { evaluators } from './evaluators.js';
-import { expandedLevelsOf, expandLevels } from './level-bounds.js';
+import { findingEvidence } from './evidence.js';
+import { expandedLevelsOf, expandLevels, levelKey } from './level-bounds.js';
 import { judge } from './verdict.js';
 
 export interface ConditionEvaluation {
@@ -62,7 +63,7 @@ export function evaluateCondition(input: {
     const altitude = altitudeApplies(criterion, condition);
     if (altitude === 'outside') continue;
     if (altitude === 'unknown') {
-      findings.push(notEvaluatedHere(criterion, `the criterion applies by altitude and condition '${condition.id}' gives no altitude`));
+      findings.push(notEvaluatedHere(criterion, requiredLevel, `the criterion applies by altitude and condition '${condition.id}' gives no altitude`));
       continue;
     }
     const modes: Mode[] = [];
@@ -73,7 +74,7 @@ export function evaluateCondition(input: {
       continue;
     }
     if (modes.length === 0) {
-      findings.push(notEvaluatedHere(criterion, absentModeReason(criterion, analysis)));
+      findings.push(notEvaluatedHere(criterion, requiredLevel, absentModeReason(criterion, analysis)));
       continue;
     }
     if (modes.length > 1) {
@@ -166,8 +167,8 @@ function absentModeReason(c: ResolvedCriterion, analysis: ModalAnalysis): string
 }
 
 /** A finding with nothing evaluated: no value, so not_evaluated, with the reason. */
-function notEvaluatedHere(c: ResolvedCriterion, reason: string): Finding {
-  return notEvaluated(c, expandedLevelsOf(c.levels), reason, undefined);
+function notEvaluatedHere(c: ResolvedCriterion, requiredLevel: Level, reason: string): Finding {
+  return notEvaluated(c, expandedLevelsOf(c.levels), findingEvidence(c, requiredLevel, false), reason, undefined);
 }
 
 /*
@@ -175,13 +176,20 @@ function notEvaluatedHere(c: ResolvedCriterion, reason: string): Finding {
  * last when there is one: a sweep makes hundreds of thousands of them, and a spread of a base
  * object per finding made the evaluation allocation-bound.
  */
-function notEvaluated(c: ResolvedCriterion, bounds: Finding['bounds'], reason: string, method: string | undefined): Finding {
-  return judged(c, bounds, null, null, 'not_evaluated', null, reason, method);
+function notEvaluated(
+  c: ResolvedCriterion,
+  bounds: Finding['bounds'],
+  evidence: Finding['evidence'],
+  reason: string,
+  method: string | undefined,
+): Finding {
+  return judged(c, bounds, evidence, null, null, 'not_evaluated', null, reason, method);
 }
 
 function judged(
   c: ResolvedCriterion,
   bounds: Finding['bounds'],
+  evidence: Finding['evidence'],
   value: number | null,
   level: Level | null,
   verdict: Finding['verdict'],
@@ -202,7 +210,7 @@ function judged(
     margin,
     bounds,
     source: c.source,
-    confidence: c.confidence,
+    evidence,
     reason: flat(reason),
   };
   if (method !== undefined) finding.method = flat(method);
@@ -223,6 +231,7 @@ function evaluateOne(args: {
   const result = row.evaluate(mode, args);
   const levels = result.adjustedBounds ?? criterion.levels;
   const bounds = levels === criterion.levels ? expandedLevelsOf(levels) : expandLevels(levels);
+  const evidence = findingEvidence(criterion, requiredLevel, levels !== criterion.levels && adjustedAt(criterion, bounds, requiredLevel));
   const ambiguity = mode.ambiguous ? ' (mode identification not clear-cut)' : '';
   const method = result.method;
   const divergentDamping = row.damping && result.divergent === true;
@@ -232,9 +241,9 @@ function evaluateOne(args: {
   if (result.value === null) {
     if (divergentDamping && bestReachable === null) {
       const reason = `${result.reason ?? 'divergent mode'}: a divergent mode fails the damping criterion${ambiguity}`;
-      return judged(criterion, bounds, null, null, 'fail', null, reason, method);
+      return judged(criterion, bounds, evidence, null, null, 'fail', null, reason, method);
     }
-    return notEvaluated(criterion, bounds, `${result.reason ?? 'no value'}${ambiguity}`, method);
+    return notEvaluated(criterion, bounds, evidence, `${result.reason ?? 'no value'}${ambiguity}`, method);
   }
   const judgement = judge({
     value: result.value,
@@ -251,5 +260,13 @@ function evaluateOne(args: {
   if (divergentDamping) reason += '; divergent mode (a root with Re > 0)';
   if (!finite) reason += '; the value is unbounded';
   if (ambiguity !== '') reason += ambiguity;
-  return judged(criterion, bounds, finite ? result.value : null, judgement.level, judgement.verdict, judgement.margin, reason, method);
+  return judged(criterion, bounds, evidence, finite ? result.value : null, judgement.level, judgement.verdict, judgement.margin, reason, method);
+}
+
+/** Whether the evaluator moved the required level's bounds away from the criterion's own. */
+function adjustedAt(c: ResolvedCriterion, bounds: Finding['bounds'], requiredLevel: Level): boolean {
+  const key = levelKey(requiredLevel);
+  const own = expandedLevelsOf(c.levels)[key];
+  const used = bounds[key];
+  return own.min !== used?.min || own.max !== used?.max;
 }

@@ -4,8 +4,13 @@
  * files are read and validated in src/load/criteria-file.ts.
  */
 import { InputError, describeFound, formatPath, type InputIssue } from '../errors.js';
-import { PROGRAMME_VALUE, type BoundInput, type CriterionInput, type OverrideInput } from '../load/criteria-schema.js';
-import type { Bound, Category, Level, LevelBounds, Quantity, ResolvedCriteriaSet, ResolvedCriterion } from '../types.js';
+import {
+  PROGRAMME_VALUE, type BoundInput, type CriterionInput, type EvidenceEntryInput, type OverrideInput,
+} from '../load/criteria-schema.js';
+import type {
+  Bound, Category, Evidence, Level, LevelBounds, Quantity, ResolvedCriteriaSet, ResolvedCriterion, SourceEntry,
+} from '../types.js';
+import { citationProblems } from './evidence.js';
 import { expandLevels, LEVELS, levelKey, type LevelKey } from './level-bounds.js';
 import { DEFAULT_ABSOLUTE_BAND, DEFAULT_RELATIVE_BAND } from './marginal-band.js';
 import type { ParsedCriteriaFile } from './parsed-criteria-file.js';
@@ -15,12 +20,23 @@ interface Origin {
   path: PropertyKey[];
 }
 
+/** Evidence while the chain is walked, with where it was written. */
+interface WorkingEvidence {
+  evidence: Evidence;
+  origin: Origin;
+}
+
 /** A criterion while the chain is walked: bounds may still hold the programme placeholder. */
 interface Working {
-  criterion: Omit<ResolvedCriterion, 'levels'>;
+  criterion: Omit<ResolvedCriterion, 'levels' | 'evidence' | 'paramEvidence'>;
   levels: Partial<Record<LevelKey, BoundInput>>;
   /** where each listed level was last written */
   levelOrigin: Partial<Record<LevelKey, Origin>>;
+  /** evidence of each listed level */
+  evidence: Partial<Record<LevelKey, WorkingEvidence>>;
+  paramEvidence: (WorkingEvidence & { params: string[] })[];
+  /** where the criterion was defined */
+  origin: Origin;
 }
 
 export function resolveCriteriaChain(files: ParsedCriteriaFile[]): ResolvedCriteriaSet {
@@ -43,9 +59,26 @@ export function resolveCriteriaChain(files: ParsedCriteriaFile[]): ResolvedCrite
   let requiredLevel: Level | undefined;
   let relativeBand: number | undefined;
   const absoluteBand: Partial<Record<Quantity, number>> = {};
+  const sources = new Map<string, SourceEntry>();
 
   for (const file of files) {
     const data = file.data;
+    (data.sources ?? []).forEach((entry, j) => {
+      const earlier = sources.get(entry.id);
+      if (earlier) {
+        issues.push(issueAt({ file, path: ['sources', j, 'id'] }, `source id '${entry.id}' is already listed by set '${earlier.set}': cite it, or give this source an id of its own`, 'duplicate_id', entry.id));
+        return;
+      }
+      sources.set(entry.id, {
+        id: entry.id,
+        kind: entry.kind,
+        title: entry.title.trim(),
+        ...(entry.reproduces !== undefined ? { reproduces: entry.reproduces.trim() } : {}),
+        ...(entry.where !== undefined ? { where: entry.where.trim() } : {}),
+        ...(entry.note !== undefined && entry.note.trim() !== '' ? { note: entry.note.trim() } : {}),
+        set: data.id,
+      });
+    });
     Object.assign(phaseCategories, data.phaseCategories ?? {});
     if (data.requiredLevel !== undefined) requiredLevel = data.requiredLevel;
     if (data.marginalBand?.relative !== undefined) relativeBand = data.marginalBand.relative;
@@ -63,7 +96,7 @@ export function resolveCriteriaChain(files: ParsedCriteriaFile[]): ResolvedCrite
       } else if (droppedHere.has(override.id)) {
         issues.push(issueAt(at, `criterion '${override.id}' is both overridden and dropped in this file`, 'override_and_drop'));
       } else {
-        applyOverride(target, override, { file, path: ['overrides', j] }, data.id);
+        applyOverride(target, override, { file, path: ['overrides', j] }, data.id, issues, issueAt, notes);
       }
     });
     (data.drop ?? []).forEach((drop, j) => {
@@ -83,7 +116,7 @@ export function resolveCriteriaChain(files: ParsedCriteriaFile[]): ResolvedCrite
       } else if (existing) {
         issues.push(issueAt(at, `criterion '${criterion.id}' is already defined by set '${existing.criterion.set}': change it under overrides`, 'duplicate_id', criterion.id));
       } else {
-        working.set(criterion.id, fromInput(criterion, { file, path: ['criteria', k] }, data.id));
+        working.set(criterion.id, fromInput(criterion, { file, path: ['criteria', k] }, data.id, issues, issueAt));
       }
       addedHere.add(criterion.id);
     });
@@ -92,7 +125,8 @@ export function resolveCriteriaChain(files: ParsedCriteriaFile[]): ResolvedCrite
   const criteria: ResolvedCriterion[] = [];
   for (const w of working.values()) {
     const levels = checkLevels(w, issues, issueAt, leaf);
-    if (levels) criteria.push({ ...w.criterion, levels });
+    const evidence = checkEvidence(w, sources, issues, issueAt);
+    if (levels && evidence) criteria.push({ ...w.criterion, levels, ...evidence });
   }
   if (issues.length > 0) throw new InputError(issues);
 
@@ -125,6 +159,7 @@ export function resolveCriteriaChain(files: ParsedCriteriaFile[]): ResolvedCrite
       absolute: { ...DEFAULT_ABSOLUTE_BAND, ...absoluteBand },
     },
     criteria,
+    sources: [...sources.values()],
     dropped,
     notes,
   };
@@ -134,11 +169,13 @@ function sourceText(source: { document: string; paragraph: string }): string {
   return `${source.document} ${source.paragraph}`;
 }
 
-function fromInput(input: CriterionInput, origin: Origin, setId: string): Working {
+function fromInput(input: CriterionInput, origin: Origin, setId: string, issues: InputIssue[], issueAt: IssueAt): Working {
   const levelOrigin: Working['levelOrigin'] = {};
   for (const key of Object.keys(input.levels) as LevelKey[]) {
     levelOrigin[key] = { file: origin.file, path: [...origin.path, 'levels', key] };
   }
+  const listed = Object.keys(input.levels) as LevelKey[];
+  const written = writtenEvidence(input.evidence, listed, { file: origin.file, path: [...origin.path, 'evidence'] }, setId, input.id, issues, issueAt);
   return {
     criterion: {
       id: input.id,
@@ -149,18 +186,75 @@ function fromInput(input: CriterionInput, origin: Origin, setId: string): Workin
       applies: structuredClone(input.applies),
       params: { ...(input.params ?? {}) },
       source: sourceText(input.source),
-      confidence: input.confidence,
       note: input.note.trim(),
     },
     levels: structuredClone(input.levels),
     levelOrigin,
+    evidence: written.levels,
+    paramEvidence: written.params,
+    origin,
   };
 }
 
+/**
+ * The evidence entries of one criterion or override, by level and by parameter group. An
+ * entry that names neither levels nor params covers `defaultLevels` (every level listed there).
+ */
+function writtenEvidence(
+  entries: readonly EvidenceEntryInput[] | undefined,
+  defaultLevels: readonly LevelKey[],
+  at: Origin,
+  setId: string,
+  criterionId: string,
+  issues: InputIssue[],
+  issueAt: IssueAt,
+): { levels: Working['evidence']; params: Working['paramEvidence'] } {
+  const levels: Working['evidence'] = {};
+  const params: Working['paramEvidence'] = [];
+  (entries ?? []).forEach((entry, e) => {
+    const origin: Origin = { file: at.file, path: [...at.path, e] };
+    const evidence: Evidence = {
+      class: entry.class,
+      cites: (entry.cites ?? []).map((c) => ({ ...c })),
+      note: (entry.note ?? '').trim(),
+      by: setId,
+    };
+    if (entry.params !== undefined) params.push({ evidence, origin, params: [...entry.params] });
+    const covered = entry.levels !== undefined ? entry.levels.map((l) => levelKey(l)) : entry.params === undefined ? defaultLevels : [];
+    for (const key of covered) {
+      if (levels[key]) {
+        issues.push(issueAt({ file: at.file, path: [...origin.path, 'levels'] }, `criterion '${criterionId}': Level ${key} is covered by two evidence entries`, 'duplicate_evidence'));
+      } else levels[key] = { evidence, origin };
+    }
+  });
+  return { levels, params };
+}
+
 /** Change what the override names; record on the criterion that it was changed, and by whom. */
-function applyOverride(target: Working, override: OverrideInput, origin: Origin, setId: string): void {
+function applyOverride(
+  target: Working,
+  override: OverrideInput,
+  origin: Origin,
+  setId: string,
+  issues: InputIssue[],
+  issueAt: IssueAt,
+  notes: string[],
+): void {
   const c = target.criterion;
   const changed: string[] = [];
+  const givenLevels = (Object.entries(override.levels ?? {}) as [LevelKey, BoundInput | undefined][])
+    .filter(([, b]) => b !== undefined)
+    .map(([k]) => k);
+  const listedAfter = [...new Set([...(Object.keys(target.levels) as LevelKey[]), ...givenLevels])].sort();
+  const written = writtenEvidence(
+    override.evidence,
+    givenLevels.length > 0 ? givenLevels : listedAfter,
+    { file: origin.file, path: [...origin.path, 'evidence'] },
+    setId,
+    override.id,
+    issues,
+    issueAt,
+  );
   if (override.title !== undefined) {
     c.title = override.title;
     changed.push('title');
@@ -181,9 +275,44 @@ function applyOverride(target: Working, override: OverrideInput, origin: Origin,
     c.params = { ...c.params, ...override.params };
     changed.push('params');
   }
-  if (override.confidence !== undefined) {
-    c.confidence = override.confidence;
-    changed.push('confidence');
+  // Evidence: what the override states replaces the parent's for the levels it covers; a
+  // level whose bounds it changes without stating evidence is shown as programme-set.
+  const unstated: LevelKey[] = [];
+  for (const key of Object.keys(written.levels) as LevelKey[]) {
+    if (!listedAfter.includes(key)) {
+      issues.push(issueAt({ file: origin.file, path: [...origin.path, 'evidence'] }, `criterion '${override.id}': evidence for Level ${key}, which neither the override nor its parent lists under \`levels\``, 'evidence'));
+    }
+  }
+  for (const key of listedAfter) {
+    const stated = written.levels[key];
+    if (stated) target.evidence[key] = stated;
+    else if (givenLevels.includes(key)) {
+      unstated.push(key);
+      target.evidence[key] = {
+        evidence: { class: 'programme-set', cites: [], note: `Level ${key} bounds set by ${setId}, which states no evidence for them.`, by: setId },
+        origin: { file: origin.file, path: [...origin.path, 'levels', key] },
+      };
+    }
+  }
+  const changedParams = Object.keys(override.params ?? {});
+  const restated = new Set(written.params.flatMap((p) => p.params));
+  const unstatedParams = changedParams.filter((p) => !restated.has(p) && target.paramEvidence.some((g) => g.params.includes(p)));
+  for (const name of [...restated, ...unstatedParams]) {
+    for (const g of target.paramEvidence) g.params = g.params.filter((p) => p !== name);
+  }
+  target.paramEvidence = target.paramEvidence.filter((g) => g.params.length > 0);
+  target.paramEvidence.push(...written.params);
+  if (unstatedParams.length > 0) {
+    target.paramEvidence.push({
+      evidence: { class: 'programme-set', cites: [], note: `Set by ${setId}, which states no evidence for them.`, by: setId },
+      origin: { file: origin.file, path: [...origin.path, 'params'] },
+      params: unstatedParams,
+    });
+  }
+  if (override.evidence !== undefined) changed.push('evidence');
+  if (unstated.length > 0 || unstatedParams.length > 0) {
+    const what = [...unstated.map((k) => `Level ${k} bounds`), ...unstatedParams.map((p) => `parameter ${p}`)].join(', ');
+    notes.push(`Set ${setId} changes ${what} of criterion ${override.id} without stating evidence: shown as programme-set.`);
   }
   if (override.source !== undefined) {
     c.source = sourceText(override.source);
@@ -200,6 +329,56 @@ function applyOverride(target: Working, override: OverrideInput, origin: Origin,
 }
 
 type IssueAt = (origin: Origin, message: string, code: string, found?: unknown) => InputIssue;
+
+/**
+ * Every listed level has its evidence, every class has the citations it asks for, and every
+ * cited id is in the chain's source list. The evidence is then filled in for every level the
+ * way bounds are: a level left out takes the evidence of the level whose bounds it holds.
+ */
+function checkEvidence(
+  w: Working,
+  sources: ReadonlyMap<string, SourceEntry>,
+  issues: InputIssue[],
+  issueAt: IssueAt,
+): Pick<ResolvedCriterion, 'evidence' | 'paramEvidence'> | undefined {
+  const before = issues.length;
+  const id = w.criterion.id;
+  const check = (entry: WorkingEvidence, what: string) => {
+    for (const p of citationProblems(entry.evidence.class, entry.evidence.cites, sources)) {
+      const path = p.cite !== undefined ? [...entry.origin.path, 'cites', p.cite, 'source'] : [...entry.origin.path, 'class'];
+      issues.push(issueAt({ file: entry.origin.file, path }, `criterion '${id}', ${what} (${entry.evidence.class}): ${p.message}`, 'evidence'));
+    }
+  };
+  const listed = Object.keys(w.levels) as LevelKey[];
+  for (const key of listed) {
+    const entry = w.evidence[key];
+    if (!entry) {
+      issues.push(issueAt({ file: w.origin.file, path: [...w.origin.path, 'evidence'] }, `criterion '${id}': no evidence entry covers Level ${key}`, 'missing_evidence'));
+    } else check(entry, `Level ${key}`);
+  }
+  for (const key of Object.keys(w.evidence) as LevelKey[]) {
+    const entry = w.evidence[key]!;
+    if (!listed.includes(key)) {
+      issues.push(issueAt({ file: entry.origin.file, path: [...entry.origin.path, 'levels'] }, `criterion '${id}': evidence for Level ${key}, which \`levels\` does not list`, 'evidence'));
+    }
+  }
+  for (const g of w.paramEvidence) {
+    const unknown = g.params.filter((p) => !(p in w.criterion.params));
+    if (unknown.length > 0) {
+      issues.push(issueAt({ file: g.origin.file, path: [...g.origin.path, 'params'] }, `criterion '${id}': evidence for parameter(s) ${unknown.join(', ')}, which \`params\` does not hold`, 'evidence'));
+    }
+    check(g, `parameters ${g.params.join(', ')}`);
+  }
+  if (issues.length > before) return undefined;
+  const evidence = {} as Record<LevelKey, Evidence>;
+  let previous: Evidence | undefined;
+  for (const level of LEVELS) {
+    const key = levelKey(level);
+    previous = w.evidence[key]?.evidence ?? previous;
+    if (previous) evidence[key] = previous;
+  }
+  return { evidence, paramEvidence: w.paramEvidence.map((g) => ({ ...g.evidence, params: g.params })) };
+}
 
 /**
  * Every bound a number, min <= max within a level, and each level at least as strict as the

@@ -49,7 +49,7 @@ export async function loadCriteriaSet(ref: string): Promise<LoadedCriteriaSet> {
       chain.unshift({ parsed: { file: shown, data: checked.data, locate: source.locate }, sha256: sha256Hex(bytes) });
       parent = checked.data.extends;
     } else {
-      issues.push(...issuesFromZod(checked.error, source));
+      issues.push(...issuesFromZod(checked.error, source).map(formerFieldHint));
       parent = (source.value as { extends?: unknown } | null)?.extends;
     }
     if (typeof parent !== 'string') break;
@@ -70,6 +70,16 @@ export async function loadCriteriaSet(ref: string): Promise<LoadedCriteriaSet> {
 
   const set = resolveCriteriaChain(chain.map((c) => c.parsed));
   return { set, files: chain.map((c) => ({ path: c.parsed.file, sha256: c.sha256 })) };
+}
+
+/** A file written for the older format names `confidence`: say what took its place. */
+function formerFieldHint(issue: InputIssue): InputIssue {
+  if (issue.code !== 'unknown_field' || !/(^|\.)confidence$/.test(issue.field)) return issue;
+  return {
+    ...issue,
+    message: "unknown field 'confidence': it was replaced by `evidence`",
+    expected: 'evidence: a list of entries with levels, class (published | secondary | conflicting | memory | programme-set), cites and note; see DEVELOPERS.md',
+  };
 }
 
 interface Located {

@@ -63,6 +63,62 @@ export const sourceSchema = z.strictObject({
   paragraph: z.string().min(1).describe('e.g. 3.2.2.1.2'),
 });
 
+export const evidenceClasses = ['published', 'secondary', 'conflicting', 'memory', 'programme-set'] as const;
+
+export const sourceKinds = ['primary', 'reproduction', 'recollection'] as const;
+
+export const sourceEntrySchema = z
+  .strictObject({
+    id: idText.describe('the id evidence entries cite it by (unique within the extends chain)'),
+    kind: z
+      .enum(sourceKinds)
+      .describe('primary: the document itself; reproduction: a named text quoting or reprinting it; recollection: a memory of it, not a text'),
+    title: z.string().min(1).describe('full citation: author, title, issuer, date'),
+    reproduces: z.string().min(1).describe('the document it reproduces or recalls, e.g. MIL-F-8785C').optional(),
+    where: z.string().min(1).describe('where it can be found: address or library reference').optional(),
+    note: z.string().describe('Markdown').optional(),
+  })
+  .describe('one source of the set');
+
+export const citationSchema = z
+  .strictObject({
+    source: idText.describe('id of an entry of the source list (this file or a file it extends)'),
+    at: z.string().min(1).describe('page, table, figure or paragraph; required for a published boundary').optional(),
+    quote: z.string().min(1).describe('a short quote of the source').optional(),
+    value: z
+      .union([z.number(), z.string().min(1)])
+      .describe("the value this source gives, in the quantity's SI unit or as text; required for each source of a conflicting boundary")
+      .optional(),
+  })
+  .describe('one source cited for a boundary');
+
+const levelNumber = z.union([z.literal(1), z.literal(2), z.literal(3)]);
+
+export const evidenceEntrySchema = z
+  .strictObject({
+    levels: z
+      .array(levelNumber)
+      .min(1)
+      .describe('the levels whose bounds this entry covers; with neither levels nor params, every level the criterion lists')
+      .optional(),
+    params: z.array(z.string().min(1)).min(1).describe('names of `params` holding boundary values that this entry covers').optional(),
+    class: z
+      .enum(evidenceClasses)
+      .describe(
+        'published: read in the primary document at a stated page; secondary: read in a named reproduction; ' +
+          'conflicting: the sources disagree (each with its value); memory: recalled or inferred, not read; ' +
+          'programme-set: chosen by the programme',
+      ),
+    cites: z.array(citationSchema).describe('the sources, from the source list').optional(),
+    note: z.string().describe('Markdown: what was read, and what remains to check').optional(),
+  })
+  .describe('what is known of some of the bounds of a criterion');
+
+export const evidenceSchema = z
+  .array(evidenceEntrySchema)
+  .min(1)
+  .describe('where each level of the bounds comes from; every level listed under `levels` is covered by exactly one entry');
+
 export const criterionSchema = z.strictObject({
   id: idText,
   title: z.string().min(1),
@@ -72,7 +128,7 @@ export const criterionSchema = z.strictObject({
   levels: levelsSchema,
   params: paramsSchema.optional(),
   source: sourceSchema,
-  confidence: z.enum(['published', 'memory']),
+  evidence: evidenceSchema,
   note: z.string().describe('Markdown'),
 });
 
@@ -86,7 +142,9 @@ export const overrideSchema = z.strictObject({
     .optional(),
   params: paramsSchema.describe('merged key by key into the parent params').optional(),
   source: sourceSchema.optional(),
-  confidence: z.enum(['published', 'memory']).optional(),
+  evidence: evidenceSchema
+    .describe('evidence of the levels (or params) given here; it replaces the parent evidence of the levels it covers. A level changed without evidence is shown as programme-set')
+    .optional(),
   note: z.string().describe('Markdown; replaces the parent note').optional(),
 });
 
@@ -116,6 +174,7 @@ export const criteriaFileSchema = z.strictObject({
     .optional(),
   phaseCategories: z.record(phaseCode, z.enum(categories)).describe('flight-phase code -> category').optional(),
   notes: z.string().describe('Markdown').optional(),
+  sources: z.array(sourceEntrySchema).describe('the sources the evidence entries of this file cite').optional(),
   criteria: z.array(criterionSchema).optional(),
   overrides: z.array(overrideSchema).optional(),
   drop: z.array(dropSchema).optional(),
@@ -125,3 +184,5 @@ export type CriteriaFileInput = z.infer<typeof criteriaFileSchema>;
 export type CriterionInput = z.infer<typeof criterionSchema>;
 export type OverrideInput = z.infer<typeof overrideSchema>;
 export type BoundInput = z.infer<typeof boundSchema>;
+export type EvidenceEntryInput = z.infer<typeof evidenceEntrySchema>;
+export type SourceEntryInput = z.infer<typeof sourceEntrySchema>;

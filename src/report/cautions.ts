@@ -15,6 +15,8 @@ export const STANDING_CAUTIONS: readonly string[] = [
   'The military boundaries apply to equivalent-system figures. Where a flight control system adds ' +
     'dynamics of its own, the modes should first be matched by a low-order equivalent system; the raw ' +
     'eigenvalues of an augmented model may not be the figures the boundaries were drawn for.',
-  'Boundary values marked \u201cfrom memory\u201d were entered without the published document at hand. ' +
-    'Check each against the issued document before relying on the verdict it supports.',
+  'Each boundary carries the class of its evidence. Only \u201cpublished\u201d boundaries were read in the primary ' +
+    'document; \u201csecondary\u201d ones were read in a reproduction, \u201cconflicting\u201d ones have sources that ' +
+    'disagree, \u201cmemory\u201d ones were recalled and \u201cprogramme-set\u201d ones were chosen by the programme. ' +
+    'Check every boundary that is not published against the issued document before relying on the verdict it supports.',
 ];

@@ -1,5 +1,7 @@
 /** `modalgate criteria show`: a resolved criteria set as terminal tables. */
-import type { Bound, ResolvedCriteriaSet } from '../types.js';
+import { EVIDENCE_ORDER } from '../criteria/evidence.js';
+import type { Bound, EvidenceClass, ResolvedCriteriaSet } from '../types.js';
+import { citationText, EVIDENCE_MEANING, evidenceGroups, levelClassesText, sourceEntryText } from './evidence-text.js';
 import { formatSig } from './format-number.js';
 import { textTable } from './text-table.js';
 import { visibleData } from '../visible-text.js';
@@ -31,7 +33,7 @@ export function formatCriteriaSetText(written: ResolvedCriteriaSet): string {
         { header: 'Level 2' },
         { header: 'Level 3' },
         { header: 'source' },
-        { header: 'values' },
+        { header: 'evidence (L1 / L2 / L3)' },
       ],
       set.criteria.map((c) => [
         c.id,
@@ -48,10 +50,31 @@ export function formatCriteriaSetText(written: ResolvedCriteriaSet): string {
         boundText(c.levels['2']),
         boundText(c.levels['3']),
         c.source,
-        c.confidence === 'memory' ? 'from memory: verify' : 'published',
+        levelClassesText(c),
       ]),
     ),
   );
+  out.push('');
+  out.push(`evidence of the ${set.criteria.length * 3} level boundaries: ${evidenceCounts(set)}`);
+  for (const cls of EVIDENCE_ORDER) out.push(`  ${cls}: ${EVIDENCE_MEANING[cls]}`);
+  out.push('');
+  out.push('evidence by criterion:');
+  for (const c of set.criteria) {
+    out.push(`  ${c.id}`);
+    for (const g of evidenceGroups(c)) {
+      const by = g.evidence.by !== c.set ? ` (stated by ${g.evidence.by})` : '';
+      out.push(`    ${g.covers}: ${g.evidence.class}${by}`);
+      for (const cite of g.evidence.cites) out.push(`      - ${citationText(cite)}`);
+      if (g.evidence.note !== '') out.push(...wrapped(g.evidence.note, '      '));
+    }
+  }
+  out.push('');
+  out.push('sources:');
+  if (set.sources.length === 0) out.push('  (none listed)');
+  for (const s of set.sources) {
+    out.push(`  ${s.id} (${s.kind}, listed by ${s.set}): ${sourceEntryText(s)}`);
+    if (s.note !== undefined) out.push(...wrapped(s.note, '      '));
+  }
   if (set.dropped.length > 0) {
     out.push('');
     out.push('dropped:');
@@ -64,4 +87,16 @@ function boundText(b: Bound | undefined): string {
   if (!b || (b.min === undefined && b.max === undefined)) return '-';
   if (b.min !== undefined && b.max !== undefined) return `${formatSig(b.min)}..${formatSig(b.max)}`;
   return b.min !== undefined ? `>= ${formatSig(b.min)}` : `<= ${formatSig(b.max)}`;
+}
+
+/** How many level boundaries of the set have each class ("12 secondary, 3 memory"). */
+function evidenceCounts(set: ResolvedCriteriaSet): string {
+  const counts = new Map<EvidenceClass, number>();
+  for (const c of set.criteria) for (const k of ['1', '2', '3'] as const) counts.set(c.evidence[k].class, (counts.get(c.evidence[k].class) ?? 0) + 1);
+  return EVIDENCE_ORDER.map((cls) => `${counts.get(cls) ?? 0} ${cls}`).join(', ');
+}
+
+/** A note on lines of its own, each under the indent. */
+function wrapped(text: string, indent: string): string[] {
+  return text.split('\n').map((l) => `${indent}${l}`.trimEnd()).filter((l) => l.trim() !== '');
 }

@@ -4,6 +4,7 @@
  * that could not be evaluated is <skipped> with its reason, so it is neither hidden as a pass
  * nor counted as a failure. Times are 0: the figures are computed, not timed tests.
  */
+import { EVIDENCE_MEANING } from './evidence-text.js';
 import type { Bound, ConditionResult, Finding, LevelBounds, Results } from '../types.js';
 import { formatSig } from './format-number.js';
 
@@ -83,7 +84,9 @@ function detail(f: Finding): string {
   }
   if (f.method) lines.push(`method: ${f.method}`);
   if (f.reason) lines.push(f.reason);
-  lines.push(`source: ${f.source}${f.confidence === 'memory' ? ' (value from memory; verify against the published document)' : ''}`);
+  lines.push(`source: ${f.source}`);
+  const cited = f.evidence.sources.length > 0 ? `; sources ${f.evidence.sources.join(', ')}` : '';
+  lines.push(`evidence of the boundary: ${f.evidence.class} (${EVIDENCE_MEANING[f.evidence.class]})${cited}`);
   return lines.join('\n');
 }
 

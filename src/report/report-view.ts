@@ -2,7 +2,7 @@
  * The review document as the templates see it: every number already formatted, every verdict
  * already a symbol and a word. Templates do no arithmetic and make no decisions.
  */
-import type { Verdict } from '../types.js';
+import type { EvidenceClass, Verdict } from '../types.js';
 import type { VerdictMark } from './verdict-marks.js';
 
 export interface VerdictTally {
@@ -61,7 +61,9 @@ export interface FindingRow {
   mark: VerdictMark;
   margin: string;
   source: string;
-  memory: boolean;
+  /** evidence class of the boundary judged against, and the ids of its sources */
+  evidence: EvidenceClass;
+  evidenceSources: { id: string; anchor: string }[];
   /** why this verdict (always filled for not evaluated) */
   reason: string;
   method: string | null;
@@ -165,7 +167,8 @@ export interface WorstCaseRow {
   set: string;
   title: string;
   source: string;
-  memory: boolean;
+  /** the weakest evidence class of the boundaries its findings were judged against */
+  evidence: EvidenceClass;
   quantity: string;
   unit: string;
   /** conditions with a finding of this criterion */
@@ -246,13 +249,53 @@ export interface ComparisonView {
   nothingChanged: boolean;
 }
 
+export interface EvidenceGroupView {
+  /** "Level 1", "Levels 2, 3", "params ..." */
+  covers: string;
+  evidence: EvidenceClass;
+  /** the set that stated it, when not the criterion's own set */
+  statedBy: string | null;
+  cites: { source: string; anchor: string; at: string | null; value: string | null; quote: string | null }[];
+  /** Markdown; rendered with raw HTML off */
+  note: string;
+}
+
 export interface CriterionNoteView {
   id: string;
   title: string;
   source: string;
-  memory: boolean;
+  /** the classes of Levels 1 / 2 / 3, or one class when they agree */
+  evidenceText: string;
+  /** the weakest class of its levels (for the mark) */
+  evidence: EvidenceClass;
+  groups: EvidenceGroupView[];
   /** Markdown; rendered with raw HTML off */
   note: string;
+}
+
+/** One entry of the list of sources at the end of the document. */
+export interface SourceView {
+  id: string;
+  /** HTML id, unique in the document */
+  anchor: string;
+  kind: string;
+  title: string;
+  reproduces: string | null;
+  where: string | null;
+  /** Markdown */
+  note: string | null;
+  /** the criteria sets that list it */
+  sets: string;
+  /** findings whose boundary cites it */
+  findings: number;
+}
+
+/** How many findings rest on boundaries of each class, and what it means for the review. */
+export interface EvidenceSummaryView {
+  notPublished: number;
+  byClass: { evidence: EvidenceClass; count: number; meaning: string }[];
+  /** one or two sentences for the first page */
+  statement: string;
 }
 
 export interface CriteriaSetView {
@@ -282,9 +325,11 @@ export interface ReportView {
   overall: VerdictMark;
   tally: VerdictTally[];
   totalFindings: number;
-  memoryFindings: number;
   /** what "marginal" means, with the band of each criteria set (first page) */
   marginalNote: string;
+  evidence: EvidenceSummaryView;
+  /** every source of the criteria sets used, cited or not */
+  sources: SourceView[];
   /** what `--detail` left in and out, in words */
   detail: string;
   /** shown when there is more than one condition */

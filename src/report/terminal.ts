@@ -173,7 +173,7 @@ function findingsTable(c: ConditionResult, paintVerdict: (v: Verdict, text: stri
     levelReachedWords(f) ?? '-',
     VERDICT_TEXT[f.verdict],
     formatSig(f.margin),
-    f.confidence === 'memory' ? 'from memory' : '',
+    f.evidence.class,
   ]);
   return textTable(
     [
@@ -184,7 +184,7 @@ function findingsTable(c: ConditionResult, paintVerdict: (v: Verdict, text: stri
       { header: 'reached' },
       { header: 'verdict' },
       { header: 'margin', align: 'right' },
-      { header: 'boundary values' },
+      { header: 'evidence' },
     ],
     rows,
     (i, j, padded) => {

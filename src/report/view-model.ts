@@ -4,9 +4,11 @@
  */
 import type { Comparison } from '../compare/compare-results.js';
 import { countVerdicts } from '../results.js';
+import { EVIDENCE_ORDER, weaker } from '../criteria/evidence.js';
 import type {
-  ConditionResult, DynamicsForm, Finding, Mode, ResolvedCriteriaSet, Results, VerdictCounts,
+  ConditionResult, DynamicsForm, EvidenceClass, Finding, Mode, ResolvedCriteriaSet, Results, SourceEntry, VerdictCounts,
 } from '../types.js';
+import { EVIDENCE_MEANING, evidenceGroups, levelClassesText } from './evidence-text.js';
 import { STANDING_CAUTIONS } from './cautions.js';
 import { comparisonView } from './comparison/comparison-view.js';
 import { conditionVerdict } from './condition-status.js';
@@ -18,7 +20,7 @@ import { shortPeriodChart } from './charts/short-period-chart.js';
 import { safeId } from './charts/svg-kit.js';
 import { categoryLabel, classLabel, MODE_LABEL, QUANTITY_LABEL, QUANTITY_UNIT } from './labels.js';
 import type {
-  ChartView, ConditionView, CriteriaSetView, FindingRow, ModeRow, OverviewView, ReportView, VerdictTally,
+  ChartView, ConditionView, CriteriaSetView, EvidenceSummaryView, FindingRow, ModeRow, OverviewView, ReportView, SourceView, VerdictTally,
 } from './report-view.js';
 import { VERDICT_ORDER, verdictMark, worstVerdict } from './verdict-marks.js';
 import { dateText, eigenvalueText, levelBoundsText, lengthText, NONE, sig, signedSig, unitText, withUnit } from './view-format.js';
@@ -105,7 +107,8 @@ function findingRow(f: Finding, c: ConditionResult): FindingRow {
     mark: verdictMark(f.verdict),
     margin: signedSig(f.margin),
     source: f.source,
-    memory: f.confidence === 'memory',
+    evidence: f.evidence.class,
+    evidenceSources: f.evidence.sources.map((id) => ({ id, anchor: sourceAnchor(id) })),
     reason: f.reason,
     method: f.method ?? null,
   };
@@ -123,11 +126,11 @@ function charts(c: ConditionResult): ChartView[] {
 /** Cautions the reader needs for this condition, beyond the warnings the analysis raised. */
 function derivedWarnings(c: ConditionResult): string[] {
   const out: string[] = [];
-  const memory = c.findings.filter((f) => f.confidence === 'memory');
-  if (memory.length > 0) {
+  const weak = c.findings.filter((f) => f.evidence.class === 'memory' || f.evidence.class === 'conflicting');
+  if (weak.length > 0) {
     out.push(
-      `${memory.length} of ${c.findings.length} findings rest on boundary values recalled from memory ` +
-        `(${[...new Set(memory.map((f) => f.criterion))].join(', ')}): verify them against the published document.`,
+      `${weak.length} of ${c.findings.length} findings rest on boundary values recalled from memory or given differently by their sources ` +
+        `(${[...new Set(weak.map((f) => f.criterion))].join(', ')}): verify them against the published document.`,
     );
   }
   const ambiguous = c.modes.filter((m) => m.ambiguous);
@@ -213,11 +216,88 @@ function setView(set: ResolvedCriteriaSet): CriteriaSetView {
       id: c.id,
       title: c.title,
       source: c.source,
-      memory: c.confidence === 'memory',
+      evidenceText: levelClassesText(c),
+      evidence: weaker(weaker(c.evidence['1'].class, c.evidence['2'].class), c.evidence['3'].class),
+      groups: evidenceGroups(c).map((g) => ({
+        covers: g.covers,
+        evidence: g.evidence.class,
+        statedBy: g.evidence.by !== c.set ? g.evidence.by : null,
+        cites: g.evidence.cites.map((x) => ({
+          source: x.source,
+          anchor: sourceAnchor(x.source),
+          at: x.at ?? null,
+          value: x.value === undefined ? null : String(x.value),
+          quote: x.quote ?? null,
+        })),
+        note: g.evidence.note,
+      })),
       note: c.note,
     })),
     dropped: set.dropped,
   };
+}
+
+/** HTML id of a source in the list at the end of the document. */
+function sourceAnchor(id: string): string {
+  return `source-${safeId(id)}`;
+}
+
+const EVIDENCE_WORDS: Record<EvidenceClass, string> = {
+  published: 'published',
+  secondary: 'secondary',
+  conflicting: 'conflicting',
+  memory: 'memory',
+  'programme-set': 'programme-set',
+};
+
+function evidenceSummary(findings: readonly Finding[]): EvidenceSummaryView {
+  const counts = new Map<EvidenceClass, number>();
+  for (const f of findings) counts.set(f.evidence.class, (counts.get(f.evidence.class) ?? 0) + 1);
+  const notPublished = findings.length - (counts.get('published') ?? 0);
+  const byClass = EVIDENCE_ORDER.filter((cls) => (counts.get(cls) ?? 0) > 0).map((cls) => ({
+    evidence: cls,
+    count: counts.get(cls) ?? 0,
+    meaning: EVIDENCE_MEANING[cls],
+  }));
+  let statement: string;
+  if (findings.length === 0) statement = 'No finding was made, so no boundary was relied on.';
+  else if (notPublished === 0) statement = 'Every finding is judged against a boundary read in the primary document, at the page cited.';
+  else {
+    const parts = EVIDENCE_ORDER.filter((cls) => cls !== 'published' && (counts.get(cls) ?? 0) > 0).map(
+      (cls) => `${counts.get(cls)} ${EVIDENCE_WORDS[cls]}`,
+    );
+    statement =
+      `${notPublished} of ${findings.length} findings are judged against a boundary that was not read in the primary document ` +
+      `(${parts.join(', ')}). Their verdicts stand only as far as those values do: before the review relies on one, ` +
+      `check its boundary in the published document. A memory or conflicting boundary may move a verdict either way; ` +
+      `the criteria section gives the evidence of every level and the sources are listed at the end.`;
+  }
+  return { notPublished, byClass, statement };
+}
+
+function sourcesView(sets: readonly ResolvedCriteriaSet[], findings: readonly Finding[]): SourceView[] {
+  const cited = new Map<string, number>();
+  for (const f of findings) for (const id of f.evidence.sources) cited.set(id, (cited.get(id) ?? 0) + 1);
+  const byId = new Map<string, { entry: SourceEntry; sets: string[] }>();
+  for (const set of sets) {
+    for (const s of set.sources) {
+      const known = byId.get(s.id);
+      if (known) {
+        if (!known.sets.includes(set.id)) known.sets.push(set.id);
+      } else byId.set(s.id, { entry: s, sets: [set.id] });
+    }
+  }
+  return [...byId.values()].map(({ entry, sets: listedBy }) => ({
+    id: entry.id,
+    anchor: sourceAnchor(entry.id),
+    kind: entry.kind,
+    title: entry.title,
+    reproduces: entry.reproduces ?? null,
+    where: entry.where ?? null,
+    note: entry.note ?? null,
+    sets: listedBy.join(', '),
+    findings: cited.get(entry.id) ?? 0,
+  }));
 }
 
 function requiredLevelsText(conditions: readonly ConditionResult[]): string {
@@ -279,8 +359,9 @@ export function buildReportView(results: Results, sets: ResolvedCriteriaSet[], o
     overall: verdictMark(worstVerdict(allFindings.map((f) => f.verdict))),
     tally: tallyOf(counts),
     totalFindings: allFindings.length,
-    memoryFindings: allFindings.filter((f) => f.confidence === 'memory').length,
     marginalNote: marginalText(sets),
+    evidence: evidenceSummary(allFindings),
+    sources: sourcesView(sets, allFindings),
     detail: detailText.charAt(0).toUpperCase() + detailText.slice(1),
     envelope: results.conditions.length > 1 ? envelopeView(results.conditions, sets, anchorOf) : null,
     comparison: options.comparison ? comparisonView(options.comparison, (id) => anchorById.get(id) ?? null) : null,

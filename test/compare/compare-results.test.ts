@@ -139,7 +139,7 @@ describe('compareResults: conditions and criteria that came or went', () => {
   });
 
   it('reports criteria sets added and removed', () => {
-    const other = results({ criteriaSets: [{ id: 'civil-23', title: 'Civil', chain: ['civil-23'] }] });
+    const other = results({ criteriaSets: [{ id: 'civil-23', title: 'Civil', chain: ['civil-23'], sources: [] }] });
     expect(compareResults(other, base).criteriaSets).toEqual({ added: ['civil-23'], removed: ['test-set'] });
   });
 });

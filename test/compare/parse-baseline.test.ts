@@ -63,8 +63,14 @@ describe('parseBaselineResults: good files', () => {
     expect(back.conditions[0]?.modes[0]?.naturalFrequency).toBe(2.2);
     expect(back.summary).toEqual({ pass: 1, marginal: 0, fail: 0, not_evaluated: 0 });
     expect(back.conditions[0]?.notes).toEqual([
-      'baseline file gave no requiredLevelFrom, airspeed, form, subsystems, coupling: stand-ins used, not for display',
+      'baseline file gave no findings[].evidence (taken from `confidence`: published as secondary, otherwise memory), requiredLevelFrom, airspeed, form, subsystems, coupling: stand-ins used, not for display',
     ]);
+    // Neither evidence nor the former confidence: memory, the least trusted class.
+    expect(back.conditions[0]?.findings[0]?.evidence).toEqual({ class: 'memory', sources: [] });
+    // A file written before evidence classes: its confidence "published" meant "read in a reproduction".
+    file.conditions[0].findings[0].confidence = 'published';
+    const older = parseBaselineResults(JSON.stringify(file, null, 2), 'old.json');
+    expect(older.conditions[0]?.findings[0]?.evidence).toEqual({ class: 'secondary', sources: [] });
     expect('extra' in (back.conditions[0] ?? {})).toBe(false);
   });
 

@@ -13,7 +13,7 @@ export function finding(over: Partial<Finding> & Pick<Finding, 'criterion' | 've
     margin: 0.1,
     bounds: { '1': { min: 0.3, max: 2 } },
     source: 'MIL-F-8785C 3.2.2.1.2 (from memory)',
-    confidence: 'memory',
+    evidence: { class: 'memory', sources: [] },
     reason: '',
     ...over,
   };
@@ -69,7 +69,7 @@ export function results(over: Partial<Results> = {}): Results {
       { role: 'criteria', path: '/a/criteria/set.yaml', sha256: 'bb'.repeat(32) },
     ],
     aircraft: { name: 'Test aircraft', class: 'II-L' },
-    criteriaSets: [{ id: 'test-set', title: 'Test set', chain: ['test-set'] }],
+    criteriaSets: [{ id: 'test-set', title: 'Test set', chain: ['test-set'], sources: [] }],
     summary: { pass: 0, marginal: 0, fail: 0, not_evaluated: 0 },
     conditions: [],
     ...over,

@@ -50,9 +50,9 @@ describe('evaluateCondition: phases, categories and selectors', () => {
         'phugoid-damping',
         'phugoid-time-to-double',
         'roll-time-constant-cat-b',
-        'spiral-time-to-double-cat-b-c-light',
+        'spiral-time-to-double-cat-b-light',
         'dutch-roll-damping-cat-b-c',
-        'dutch-roll-damping-frequency-cat-b-c',
+        'dutch-roll-damping-frequency-cat-b',
         'dutch-roll-frequency-cat-b',
       ].sort(),
     );
@@ -84,7 +84,7 @@ describe('evaluateCondition: unstable modes fail the damping criteria', () => {
     expect(zeta.value).toBeCloseTo(-0.1 / Math.hypot(0.1, 2), 12);
     expect(zeta).toMatchObject({ level: null, verdict: 'fail' });
     expect(zeta.reason).toMatch(/divergent/);
-    expect(finding(r.findings, 'dutch-roll-damping-frequency-cat-b-c')).toMatchObject({ level: null, verdict: 'fail', value: -0.1 });
+    expect(finding(r.findings, 'dutch-roll-damping-frequency-cat-b')).toMatchObject({ level: null, verdict: 'fail', value: -0.1 });
   });
 
   it('a split short period with a positive root has no damping ratio and fails, not "not evaluated"', () => {
@@ -102,7 +102,7 @@ describe('evaluateCondition: unstable modes fail the damping criteria', () => {
 
   it('a divergent spiral is judged by its time to double: ln 2 / 0.05 = 13.9 s is Level 2 for Class I, Cat B (3.3.1.3)', () => {
     const modes = replace(healthyModes(), modeFromRoots('spiral', [{ re: 0.05, im: 0 }]));
-    const f = finding(evaluate(modes, { phase: 'CR' }).findings, 'spiral-time-to-double-cat-b-c-light');
+    const f = finding(evaluate(modes, { phase: 'CR' }).findings, 'spiral-time-to-double-cat-b-light');
     expect(f.value).toBeCloseTo(Math.LN2 / 0.05, 12);
     expect(f).toMatchObject({ level: 2, verdict: 'fail' });
     expect(f.margin).toBeCloseTo(Math.LN2 / 0.05 - 20, 12);
@@ -169,7 +169,7 @@ describe('evaluateCondition: missing modes and figures are not evaluated, with t
 
   it('the |phi/beta| rule without a phi state in the mode shape', () => {
     const modes = replace(healthyModes(), modeFromRoots('dutch_roll', pairFrom(0.3, 2), [share('beta', 1)]));
-    const f = finding(evaluate(modes, { phase: 'CR' }).findings, 'dutch-roll-damping-frequency-cat-b-c');
+    const f = finding(evaluate(modes, { phase: 'CR' }).findings, 'dutch-roll-damping-frequency-cat-b');
     expect(f).toMatchObject({ verdict: 'not_evaluated', value: null });
     expect(f.reason).toMatch(/no phi state/);
   });
@@ -198,24 +198,43 @@ describe('evaluators: derived figures and rules', () => {
     // 0 + 0.005 x 20 = 0.10. zeta omega = 0.2 x 2 = 0.4: Level 2.
     const shape = [share('v', 1), share('phi', 0.1)];
     const modes = replace(healthyModes(), modeFromRoots('dutch_roll', pairFrom(0.2, 2), shape));
-    const f = finding(evaluate(modes, { phase: 'CR', airspeed: 100 }).findings, 'dutch-roll-damping-frequency-cat-b-c');
+    const f = finding(evaluate(modes, { phase: 'CR', airspeed: 100 }).findings, 'dutch-roll-damping-frequency-cat-b');
     expect(f.value).toBeCloseTo(0.4, 12);
     expect(f.bounds['1']?.min).toBeCloseTo(0.43, 12);
     expect(f.bounds['2']?.min).toBeCloseTo(0.23, 12);
     expect(f.bounds['3']?.min).toBeCloseTo(0.1, 12);
     expect(f).toMatchObject({ level: 2, verdict: 'fail' });
     expect(f.method).toContain('beta = v / V');
+    // The Level 1 minimum 0.15 is secondary, the rise is from memory: the bound used is as weak as the rise.
+    expect(f.evidence).toEqual({ class: 'memory', sources: ['tu144-flight-data-report', 'simulator-validation-notes'] });
+  });
+
+  it('Category C, Classes II-L and III: the Level 1 zeta omega_n minimum is 0.10 rad/s, 0.15 for the light classes (3.3.1.1)', () => {
+    // MIL-STD-1797A recommended value, as quoted in Curry's NASA contractor report on the Tu-144
+    // flight data, Table 7(b), Class III Category C: "1 / 0.08 / 0.10 / 0.4"; 0.15 for Classes
+    // I, II-C, IV (textbook reprint, Table 10.2). zeta 0.1 at omega 1.2 rad/s: zeta omega = 0.12.
+    const modes = replace(healthyModes(), modeFromRoots('dutch_roll', pairFrom(0.1, 1.2), [share('beta', 1), share('phi', 1)]));
+    const heavy = finding(evaluate(modes, { phase: 'PA' }, 'III').findings, 'dutch-roll-damping-frequency-cat-c-heavy');
+    expect(heavy.value).toBeCloseTo(0.12, 12);
+    expect(heavy.bounds['1']?.min).toBe(0.1);
+    expect(heavy).toMatchObject({ level: 1, verdict: 'pass', evidence: { class: 'secondary', sources: ['tu144-flight-data-report'] } });
+    const light = finding(evaluate(modes, { phase: 'PA' }, 'I').findings, 'dutch-roll-damping-frequency-cat-c-light');
+    expect(light.bounds['1']?.min).toBe(0.15);
+    expect(light).toMatchObject({ level: 2, verdict: 'fail' });
   });
 
   it('Class III need not exceed zeta = 0.7: the zeta omega_n minimum is capped at 0.7 omega_n (3.3.1.1, from memory)', () => {
     // omega = 0.2: 0.7 x 0.2 = 0.14 < 0.15, so the Level 1 minimum becomes 0.14
     const modes = replace(healthyModes(), modeFromRoots('dutch_roll', pairFrom(0.72, 0.2), [share('beta', 1), share('phi', 1)]));
-    const heavy = finding(evaluate(modes, { phase: 'CR' }, 'III').findings, 'dutch-roll-damping-frequency-cat-b-c');
+    const heavy = finding(evaluate(modes, { phase: 'CR' }, 'III').findings, 'dutch-roll-damping-frequency-cat-b');
     expect(heavy.bounds['1']?.min).toBeCloseTo(0.14, 12);
     expect(heavy.level).toBe(1);
-    const light = finding(evaluate(modes, { phase: 'CR' }, 'I').findings, 'dutch-roll-damping-frequency-cat-b-c');
+    const light = finding(evaluate(modes, { phase: 'CR' }, 'I').findings, 'dutch-roll-damping-frequency-cat-b');
     expect(light.bounds['1']?.min).toBe(0.15);
     expect(light.level).toBe(2);
+    // unmoved bound: the evidence of the Level 1 minimum alone
+    expect(light.evidence.class).toBe('secondary');
+    expect(heavy.evidence.class).toBe('memory');
   });
 });
 

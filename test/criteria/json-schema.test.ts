@@ -17,7 +17,7 @@ describe('criteriaJsonSchema', () => {
     expect(schema.additionalProperties).toBe(false);
     expect(schema.properties.criteria.items.additionalProperties).toBe(false);
     expect(schema.properties.criteria.items.required).toEqual(
-      expect.arrayContaining(['id', 'title', 'mode', 'quantity', 'applies', 'levels', 'source', 'confidence', 'note']),
+      expect.arrayContaining(['id', 'title', 'mode', 'quantity', 'applies', 'levels', 'source', 'evidence', 'note']),
     );
   });
 });

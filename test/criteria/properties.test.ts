@@ -34,7 +34,7 @@ criteria:
     applies: {}
     levels: { "1": { min: ${m1} }, "2": { min: ${m2} }, "3": { min: ${m3} } }
     source: { document: property test, paragraph: "-" }
-    confidence: published
+    evidence: [{ class: memory }]
     note: ""
 `;
   return resolveCriteriaChain([parsedFile(text, 'lower-bound.yaml')]);

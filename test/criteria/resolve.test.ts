@@ -28,7 +28,7 @@ criteria:
       "3": { min: 0.15 }
     params: { a: 1 }
     source: { document: MIL-F-8785C, paragraph: "3.2.2.1.2" }
-    confidence: memory
+    evidence: [{ class: memory }]
     note: Base note.
   - id: roll-tc
     title: Roll-mode time constant
@@ -37,7 +37,7 @@ criteria:
     applies: {}
     levels: { "1": { max: 1.4 }, "2": { max: 3.0 }, "3": { max: 10 } }
     source: { document: MIL-F-8785C, paragraph: "3.3.1.2" }
-    confidence: published
+    evidence: [{ class: memory }]
     note: ""
 `,
   'base.yaml',
@@ -101,7 +101,7 @@ criteria:
     applies: {}
     levels: { "1": { min: 30 } }
     source: { document: Programme spec, paragraph: "2" }
-    confidence: published
+    evidence: [{ class: memory }]
     note: ""
 `),
     ]);
@@ -139,7 +139,7 @@ criteria:
     applies: {}
     levels: { "1": { max: 1 } }
     source: { document: d, paragraph: p }
-    confidence: published
+    evidence: [{ class: memory }]
     note: ""
 `,
       'bare.yaml',
@@ -158,7 +158,7 @@ criteria:
     [
       'a new criterion reusing a parent id',
       `criteria:
-  - { id: roll-tc, title: t, mode: roll, quantity: time_constant, applies: {}, levels: { "1": { max: 1 } }, source: { document: d, paragraph: p }, confidence: published, note: "" }
+  - { id: roll-tc, title: t, mode: roll, quantity: time_constant, applies: {}, levels: { "1": { max: 1 } }, source: { document: d, paragraph: p }, evidence: [{ class: memory }], note: "" }
 `,
       "child.yaml:6:11: criteria[0].id: criterion 'roll-tc' is already defined by set 'base': change it under overrides (found \"roll-tc\") [duplicate_id]",
     ],

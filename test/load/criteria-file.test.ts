@@ -82,7 +82,25 @@ describe('loadCriteriaSet: bad files (messages pinned)', () => {
     [
       'heavily-damped threshold left unset (14 CFR 25.181 gives no number)',
       `${bad}/heavily-damped-unset.yaml`,
-      `criteria/civil-dynamic-stability.yaml:103:19: criteria[3].levels.1.min: criterion 'part25-short-period-heavily-damped': the Level 1 min is a value the programme must set (set 'heavily-damped-unset' in ${bad}/heavily-damped-unset.yaml leaves it unset); extend the set and give it under overrides, or drop the criterion with a reason [unset_value]`,
+      `criteria/civil-dynamic-stability.yaml:131:19: criteria[3].levels.1.min: criterion 'part25-short-period-heavily-damped': the Level 1 min is a value the programme must set (set 'heavily-damped-unset' in ${bad}/heavily-damped-unset.yaml leaves it unset); extend the set and give it under overrides, or drop the criterion with a reason [unset_value]`,
+    ],
+    [
+      'evidence that does not hold: wrong source kind, unknown source, values missing, a level uncovered or covered twice',
+      `${bad}/evidence.yaml`,
+      [
+        `${bad}/evidence.yaml:38:17: criteria[1].evidence[1].levels: criterion 'sp-damping': Level 1 is covered by two evidence entries [duplicate_evidence]`,
+        `${bad}/evidence.yaml:21:16: criteria[0].evidence[0].class: criterion 'dr-damping', Level 1 (published): a published boundary cites the primary document (a source of kind primary) with the page or paragraph in \`at\` [evidence]`,
+        `${bad}/evidence.yaml:25:68: criteria[0].evidence[1].cites[1].source: criterion 'dr-damping', Level 2 (conflicting): cites source 'nowhere', which no source list of the chain holds (known: spec, notes, recalled) [evidence]`,
+        `${bad}/evidence.yaml:25:68: criteria[0].evidence[1].cites[1].source: criterion 'dr-damping', Level 2 (conflicting): source 'nowhere' of a conflicting boundary gives no \`value\` [evidence]`,
+        `${bad}/evidence.yaml:20:7: criteria[0].evidence: criterion 'dr-damping': no evidence entry covers Level 3 [missing_evidence]`,
+        `${bad}/evidence.yaml:36:16: criteria[1].evidence[0].class: criterion 'sp-damping', Level 1 (secondary): a secondary boundary cites the named text it was read in (a source of kind reproduction or primary) [evidence]`,
+        `${bad}/evidence.yaml:38:17: criteria[1].evidence[1].levels: criterion 'sp-damping': evidence for Level 3, which \`levels\` does not list [evidence]`,
+      ].join('\n'),
+    ],
+    [
+      'a file written with the former confidence field is told what replaced it',
+      `${bad}/former-confidence.yaml`,
+      `${bad}/former-confidence.yaml:9:5: overrides[0].confidence: unknown field 'confidence': it was replaced by \`evidence\` (expected evidence: a list of entries with levels, class (published | secondary | conflicting | memory | programme-set), cites and note; see DEVELOPERS.md) [unknown_field]`,
     ],
     [
       'no such file',

@@ -70,7 +70,7 @@ describe('renderJunit: counts', () => {
     expect(failure?.attributes.type).toBe('fail');
     expect(failure?.attributes.message).toBe('fail: value 0.2500 [-], Level 1 bounds min 0.3000 max 2.000, level reached 2 (required 1), margin -0.0500');
     expect(failure?.text).toContain('Level 3: min 0.1500');
-    expect(failure?.text).toContain('(value from memory; verify against the published document)');
+    expect(failure?.text).toContain('evidence of the boundary: memory (recalled or inferred, not read in any retrievable text');
   });
 
   it('gives the reason of a finding not evaluated', () => {
@@ -126,8 +126,8 @@ describe('renderJunit: escaping', () => {
     },
     {
       field: 'source in failure text',
-      make: () => results({ conditions: [condition({ id: 'c', findings: [sp({ verdict: 'fail', source: nasty, confidence: 'published' })] })] }),
-      read: (r) => elementsNamed(r, 'failure')[0]?.text.split('\n').pop(),
+      make: () => results({ conditions: [condition({ id: 'c', findings: [sp({ verdict: 'fail', source: nasty })] })] }),
+      read: (r) => elementsNamed(r, 'failure')[0]?.text.split('\n').find((l) => l.startsWith('source: ')),
       expected: `source: ${nasty}`,
     },
     {

@@ -17,7 +17,7 @@ describe('buildReportView', () => {
     });
     expect(view.totalFindings).toBe(findings.length);
     expect(view.overall.word).toBe('FAIL');
-    expect(view.memoryFindings).toBe(findings.filter((f) => f.confidence === 'memory').length);
+    expect(view.evidence.notPublished).toBe(findings.filter((f) => f.evidence.class !== 'published').length);
   });
 
   it('keeps a symbol beside every verdict word', () => {

@@ -4,7 +4,8 @@
  * reads them in) and numbered once, so that the verdict matrix and the worst-case table share
  * the numbers.
  */
-import type { ConditionResult, ModeKind, Quantity, ResolvedCriteriaSet } from '../../types.js';
+import { weaker } from '../../criteria/evidence.js';
+import type { ConditionResult, EvidenceClass, ModeKind, Quantity, ResolvedCriteriaSet } from '../../types.js';
 
 export interface CriterionColumn {
   /** 1-based number printed in the matrix heading */
@@ -15,7 +16,8 @@ export interface CriterionColumn {
   set: string;
   title: string;
   source: string;
-  memory: boolean;
+  /** the weakest evidence class of the boundaries its findings were judged against */
+  evidence: EvidenceClass;
   mode: ModeKind;
   quantity: Quantity | null;
   /** unit of the findings' values, as the results give it ('' when unknown) */
@@ -29,12 +31,13 @@ export function criterionKey(set: string, id: string): string {
 }
 
 export function criterionColumns(conditions: readonly ConditionResult[], sets: readonly ResolvedCriteriaSet[]): CriterionColumn[] {
-  const declared = new Map<string, { mode: ModeKind; quantity: Quantity; memory: boolean; title: string; source: string }>();
+  const declared = new Map<string, { mode: ModeKind; quantity: Quantity; evidence: EvidenceClass; title: string; source: string }>();
   for (const s of sets) {
     for (const c of s.criteria) {
-      declared.set(criterionKey(c.set, c.id), { mode: c.mode, quantity: c.quantity, memory: c.confidence === 'memory', title: c.title, source: c.source });
+      const d = { mode: c.mode, quantity: c.quantity, evidence: weaker(weaker(c.evidence['1'].class, c.evidence['2'].class), c.evidence['3'].class), title: c.title, source: c.source };
+      declared.set(criterionKey(c.set, c.id), d);
       // A criterion inherited through `extends` may be reported under the child set's id.
-      declared.set(criterionKey(s.id, c.id), { mode: c.mode, quantity: c.quantity, memory: c.confidence === 'memory', title: c.title, source: c.source });
+      declared.set(criterionKey(s.id, c.id), d);
     }
   }
   const seen = new Map<string, Omit<CriterionColumn, 'number'> & { first: number }>();
@@ -42,9 +45,13 @@ export function criterionColumns(conditions: readonly ConditionResult[], sets: r
   for (const c of conditions) {
     for (const f of c.findings) {
       const key = criterionKey(f.set, f.criterion);
-      if (seen.has(key)) continue;
+      const known = seen.get(key);
+      if (known) {
+        known.evidence = weaker(known.evidence, f.evidence.class);
+        continue;
+      }
       seen.set(key, {
-        key, id: f.criterion, set: f.set, title: f.title, source: f.source, memory: f.confidence === 'memory',
+        key, id: f.criterion, set: f.set, title: f.title, source: f.source, evidence: f.evidence.class,
         mode: f.mode, quantity: f.quantity, unit: f.unit, first: order++,
       });
     }
@@ -53,7 +60,7 @@ export function criterionColumns(conditions: readonly ConditionResult[], sets: r
       if (seen.has(key)) continue;
       const d = declared.get(key);
       seen.set(key, {
-        key, id: n.criterion, set: n.set, title: n.title, source: n.source, memory: d?.memory ?? false,
+        key, id: n.criterion, set: n.set, title: n.title, source: n.source, evidence: d?.evidence ?? 'memory',
         mode: d?.mode ?? 'other', quantity: d?.quantity ?? null, unit: '', first: order++,
       });
     }

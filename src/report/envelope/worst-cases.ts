@@ -64,7 +64,7 @@ export function worstCases(
       set: col.set,
       title: col.title,
       source: col.source,
-      memory: col.memory,
+      evidence: col.evidence,
       quantity: col.quantity ? QUANTITY_LABEL[col.quantity] : '\u2013',
       unit,
       evaluated: s.evaluated,
