@@ -16,8 +16,8 @@ export interface AnalyseOptions {
 export function analyseModes(system: StateSpace, options: AnalyseOptions): ModalAnalysis {
   checkSystem(system, options);
   const subsystems = splitSubsystems(system.states);
-  const coupling = measureCoupling(system.A, system.states);
   const roots = collectRoots(system.A, system.states);
+  const coupling = measureCoupling(system.A, system.states, roots.values);
   const identification = identifyModes(roots.roots, { airspeed: options.airspeed });
 
   const warnings: string[] = [];

@@ -46,6 +46,20 @@ const workBySize = new Map<number, Work>();
  * work buffers reused by the next call of the same size: copy what must outlive it.
  */
 export function realEigen(A: ArrayLike<number>, n: number): RealEigen {
+  return solve(A, n, true);
+}
+
+/**
+ * Eigenvalues only (`d`, `e`; `V` is left unset), in the same reused buffers. The arithmetic
+ * on H is that of realEigen in the same order, so the eigenvalues are the same bit for bit:
+ * what is left out (accumulating the transformations, the back-substitution) never feeds
+ * back into H.
+ */
+export function realEigenvalues(A: ArrayLike<number>, n: number): Pick<RealEigen, 'n' | 'd' | 'e'> {
+  return solve(A, n, false);
+}
+
+function solve(A: ArrayLike<number>, n: number, vectors: boolean): RealEigen {
   let w = workBySize.get(n);
   if (w === undefined) {
     const m = n * n;
@@ -57,12 +71,13 @@ export function realEigen(A: ArrayLike<number>, n: number): RealEigen {
   d.fill(0);
   e.fill(0);
   ort.fill(0);
-  orthes(n, H, ort, V);
-  hqr2(n, e, d, V, H);
+  orthes(n, H, ort, V, vectors);
+  hqr2(n, e, d, V, H, vectors);
   return w;
 }
 
-function orthes(n: number, H: Float64Array, ort: Float64Array, V: Float64Array): void {
+/** `vectors` false: H only, V is neither set nor read. */
+function orthes(n: number, H: Float64Array, ort: Float64Array, V: Float64Array, vectors: boolean): void {
   const N = n;
   let low = 0;
   let high = n - 1;
@@ -119,6 +134,8 @@ function orthes(n: number, H: Float64Array, ort: Float64Array, V: Float64Array):
     }
   }
 
+  if (!vectors) return;
+
   for (i = 0; i < n; i++) {
     for (j = 0; j < n; j++) {
       V[i * N + j] = i === j ? 1 : 0;
@@ -151,7 +168,7 @@ function orthes(n: number, H: Float64Array, ort: Float64Array, V: Float64Array):
  * took 40-100 ms to compile, four times over in a 10,000-condition sweep, while the sweep ran
  * in the interpreter.
  */
-function hqr2(nn: number, e: Float64Array, d: Float64Array, V: Float64Array, H: Float64Array): void {
+function hqr2(nn: number, e: Float64Array, d: Float64Array, V: Float64Array, H: Float64Array, vectors: boolean): void {
   const N = nn;
   const low = 0;
   const high = nn - 1;
@@ -168,9 +185,9 @@ function hqr2(nn: number, e: Float64Array, d: Float64Array, V: Float64Array, H: 
     }
   }
 
-  reduceToSchur(nn, e, d, V, H, norm);
+  reduceToSchur(nn, e, d, V, H, norm, vectors);
 
-  if (norm === 0) {
+  if (!vectors || norm === 0) {
     return;
   }
 
@@ -185,7 +202,7 @@ function hqr2(nn: number, e: Float64Array, d: Float64Array, V: Float64Array, H: 
 }
 
 /** The shifted QR iteration of hqr2: H to real Schur form, the eigenvalues into d and e. */
-function reduceToSchur(nn: number, e: Float64Array, d: Float64Array, V: Float64Array, H: Float64Array, norm: number): void {
+function reduceToSchur(nn: number, e: Float64Array, d: Float64Array, V: Float64Array, H: Float64Array, norm: number, vectors: boolean): void {
   const N = nn;
   let n = nn - 1;
   const low = 0;
@@ -257,7 +274,7 @@ function reduceToSchur(nn: number, e: Float64Array, d: Float64Array, V: Float64A
           H[i * N + n] = q * H[i * N + n]! - p * z;
         }
 
-        for (i = low; i <= high; i++) {
+        for (i = low; vectors && i <= high; i++) {
           z = V[i * N + (n - 1)]!;
           V[i * N + (n - 1)] = q * z + p * V[i * N + n]!;
           V[i * N + n] = q * V[i * N + n]! - p * z;
@@ -406,7 +423,7 @@ function reduceToSchur(nn: number, e: Float64Array, d: Float64Array, V: Float64A
             H[i * N + (k + 1)] = H[i * N + (k + 1)]! - p * q;
           }
 
-          for (i = low; i <= high; i++) {
+          for (i = low; vectors && i <= high; i++) {
             p = x * V[i * N + k]! + y * V[i * N + (k + 1)]!;
             if (notlast) {
               p = p + z * V[i * N + (k + 2)]!;
@@ -626,6 +643,9 @@ function warmUp(): void {
   for (let n = 2; n <= 8; n += 1) {
     for (let k = 0; k < 6; k += 1) cases.push(Array.from({ length: n * n }, next));
   }
-  for (const a of cases) realEigen(a, Math.round(Math.sqrt(a.length)));
+  for (const a of cases) {
+    realEigen(a, Math.round(Math.sqrt(a.length)));
+    realEigenvalues(a, Math.round(Math.sqrt(a.length)));
+  }
 }
 warmUp();

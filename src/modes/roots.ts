@@ -24,6 +24,11 @@ export interface Root {
 
 export interface RootSet {
   roots: Root[];
+  /**
+   * [1/s] every eigenvalue as the solver gave it, conjugates included, block by block: the
+   * spectrum of A (spectrum.ts), without computing it again
+   */
+  values: Complex[];
   warnings: string[];
 }
 
@@ -35,6 +40,7 @@ const REAL_ROOT_TOLERANCE = 1e-10;
 
 export function collectRoots(A: readonly (readonly number[])[], states: readonly string[]): RootSet {
   const roots: Root[] = [];
+  const values: Complex[] = [];
   const warnings: string[] = [];
   for (const block of structuralBlocks(A)) {
     const blockStates = block.map((i) => states[i]!);
@@ -47,6 +53,7 @@ export function collectRoots(A: readonly (readonly number[])[], states: readonly
         }): two roots are close to coalescing, so participation factors are uncertain`,
       );
     }
+    values.push(...system.values);
     for (let j = 0; j < system.n; j += 1) {
       const value = system.values[j]!;
       const oscillatory = Math.abs(value.im) > REAL_ROOT_TOLERANCE * Math.sqrt(value.re ** 2 + value.im ** 2);
@@ -64,7 +71,7 @@ export function collectRoots(A: readonly (readonly number[])[], states: readonly
       });
     }
   }
-  return { roots, warnings };
+  return { roots, values, warnings };
 }
 
 /** Of a split mode's two real roots, the one with the larger real part: it governs the response. */

@@ -61,8 +61,14 @@ export interface CouplingMeasure {
  * floor = 1e-4 of the spectral radius so that zero roots do not divide by zero. Eigenvalues do
  * not change with state scaling, so neither does the measure; a one-way coupling (only one
  * cross block non-zero) leaves the roots unchanged and measures 0, as it should.
+ * `values` are the eigenvalues of A already found for the modes (RootSet.values, in the order
+ * spectrum() gives them); only those of A0 are computed here, without eigenvectors.
  */
-export function measureCoupling(A: readonly (readonly number[])[], states: readonly string[]): CouplingMeasure {
+export function measureCoupling(
+  A: readonly (readonly number[])[],
+  states: readonly string[],
+  values: readonly Complex[],
+): CouplingMeasure {
   const groups = states.map(stateGroup);
   const zeroed = A.map((row) => row.slice());
   let cross = false;
@@ -79,7 +85,7 @@ export function measureCoupling(A: readonly (readonly number[])[], states: reado
     }
   }
   if (!cross) return { coupling: 0, decoupled: true, tolerance: COUPLING_TOLERANCE };
-  const coupling = largestRelativeShift(spectrum(A), spectrum(zeroed));
+  const coupling = largestRelativeShift(values, spectrum(zeroed));
   return { coupling, decoupled: coupling <= COUPLING_TOLERANCE, tolerance: COUPLING_TOLERANCE };
 }
 

@@ -1,7 +1,8 @@
 import fc from 'fast-check';
 import { EigenvalueDecomposition, Matrix } from 'ml-matrix';
 import { describe, expect, it } from 'vitest';
-import { realEigen } from '../../src/modes/real-eigen.js';
+import { realEigen, realEigenvalues } from '../../src/modes/real-eigen.js';
+import { eigenDecompose, eigenvalues } from '../../src/modes/eigen.js';
 
 // The flat-array Hessenberg-QR solver against the general-purpose library it was translated
 // from (ml-matrix 6, npm registry; its non-symmetric path is the JAMA port of EISPACK orthes
@@ -118,5 +119,34 @@ describe('realEigen (flat Hessenberg-QR) against ml-matrix EigenvalueDecompositi
     const other = realEigen(flat([[3]]), 1);
     expect(other.d[0]).toBe(3);
     expect(first.d[0]).toBeCloseTo(-0.2, 14);
+  });
+});
+
+describe('realEigenvalues and eigenvalues (no eigenvectors)', () => {
+  it('give the eigenvalues of the full decomposition bit for bit', () => {
+    fc.assert(
+      fc.property(square, (rows) => {
+        let full: { d: number[]; e: number[] };
+        try {
+          const r = realEigen(flat(rows), rows.length);
+          full = { d: Array.from(r.d), e: Array.from(r.e) };
+        } catch (err) {
+          fc.pre(!/did not converge/.test(String(err)));
+          throw err;
+        }
+        const only = realEigenvalues(flat(rows), rows.length);
+        expect({ d: Array.from(only.d), e: Array.from(only.e) }).toEqual(full);
+        // and through balancing, as the coupling check takes them
+        let decomposed: ReturnType<typeof eigenDecompose> | undefined;
+        try {
+          decomposed = eigenDecompose(rows);
+        } catch (err) {
+          fc.pre(!/did not converge/.test(String(err)));
+          throw err;
+        }
+        expect(eigenvalues(rows)).toEqual(decomposed.values);
+      }),
+      { numRuns: 400, seed: 20261203 },
+    );
   });
 });

@@ -1,6 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { COUPLING_TOLERANCE, measureCoupling, splitSubsystems, stateGroup } from '../../src/modes/subsystems.js';
 import { structuralBlocks } from '../../src/modes/structural-blocks.js';
+import { spectrum } from '../../src/modes/spectrum.js';
+import { collectRoots } from '../../src/modes/roots.js';
 import { combine, navionLateral, navionLongitudinal } from './navion-fixture.js';
 
 // State groups by name: the model contract of modalgate (longitudinal u, w, alpha, vT, q,
@@ -45,6 +47,8 @@ describe('structuralBlocks', () => {
 
 describe('measureCoupling', () => {
   const base = combine(navionLongitudinal(), navionLateral());
+  // the eigenvalues of A found with the modes, as analyseModes passes them
+  const coupling = (A: number[][], states: readonly string[]) => measureCoupling(A, states, collectRoots(A, states).values);
   const withCross = (entries: [string, string, number][]) => {
     const A = base.A.map((row) => row.slice());
     for (const [i, j, x] of entries) A[base.states.indexOf(i)]![base.states.indexOf(j)] = x;
@@ -52,17 +56,17 @@ describe('measureCoupling', () => {
   };
 
   it('is zero without cross terms', () => {
-    expect(measureCoupling(base.A, base.states)).toEqual({ coupling: 0, decoupled: true, tolerance: COUPLING_TOLERANCE });
+    expect(coupling(base.A, base.states)).toEqual({ coupling: 0, decoupled: true, tolerance: COUPLING_TOLERANCE });
   });
 
   it('is zero for a one-way coupling, which cannot move a root (block-triangular matrix)', () => {
     const A = withCross([['p', 'q', 3], ['r', 'u', 0.2]]);
-    expect(measureCoupling(A, base.states).coupling).toBeLessThan(1e-12);
+    expect(coupling(A, base.states).coupling).toBeLessThan(1e-12);
   });
 
   it('grows with two-way coupling and does not depend on state units', () => {
-    const small = measureCoupling(withCross([['q', 'r', 0.1], ['r', 'q', -0.1]]), base.states).coupling;
-    const large = measureCoupling(withCross([['q', 'r', 1], ['r', 'q', -1]]), base.states).coupling;
+    const small = coupling(withCross([['q', 'r', 0.1], ['r', 'q', -0.1]]), base.states).coupling;
+    const large = coupling(withCross([['q', 'r', 1], ['r', 'q', -1]]), base.states).coupling;
     expect(small).toBeGreaterThan(0);
     expect(large).toBeGreaterThan(small);
     // the same coupling with q in deg/s (row q times 57.3, column q divided by 57.3)
@@ -70,6 +74,14 @@ describe('measureCoupling', () => {
     const A = withCross([['q', 'r', 1], ['r', 'q', -1]]);
     const qi = base.states.indexOf('q');
     const scaled = A.map((row, i) => row.map((x, j) => (x * (i === qi ? k : 1)) / (j === qi ? k : 1)));
-    expect(measureCoupling(scaled, base.states).coupling).toBeCloseTo(large, 9);
+    expect(coupling(scaled, base.states).coupling).toBeCloseTo(large, 9);
+  });
+
+  it('reuses the roots found for the modes: the same measure as from the spectrum of A computed afresh', () => {
+    const A = withCross([['q', 'r', 0.4], ['r', 'q', -0.3], ['w', 'p', 0.05], ['p', 'w', 0.02]]);
+    const reused = coupling(A, base.states);
+    expect(reused.coupling).toBeGreaterThan(0);
+    expect(collectRoots(A, base.states).values).toEqual(spectrum(A));
+    expect(measureCoupling(A, base.states, spectrum(A))).toEqual(reused);
   });
 });
