@@ -22,7 +22,11 @@ reasons, categories, warnings or input hash), as this reference did at first; th
 it too, for information, beside the full one the target is set against.
 
 Only state-space conditions with the eight states u, w, q, theta, v, p, r, phi (any order) are
-analysed; any other condition is listed as skipped. Units are SI; no US unit conversion here.
+analysed; any other condition is listed as skipped. The file's `units` (SI or US) and its
+top-level `gravity`, if any, are read as written: the eigenvalues, participation factors and
+modal figures do not depend on the unit of length, and n/alpha = -V Z_w / g takes V and g in
+the file's units. The aircraft class is read as written too: the boundaries held here are those
+of Classes II-L and III (MIL-F-8785C, Categories B and C), and any other class stops the run.
 """
 import hashlib
 import json
@@ -33,13 +37,14 @@ import numpy as np
 
 STATES = ["u", "w", "q", "theta", "v", "p", "r", "phi"]
 LONGITUDINAL = np.array([1, 1, 1, 1, 0, 0, 0, 0], dtype=bool)
-G = 9.80665  # [m/s^2]
+GRAVITY = {"SI": 9.80665, "US": 32.174}  # standard gravity [m/s^2], [ft/s^2]
+CLASSES = ("II-L", "III")  # the classes whose boundaries BOUNDS holds
 LN2 = math.log(2.0)
 
 # Category by phase code (MIL-F-8785C 1.5; only the codes the sweep uses).
 CATEGORY = {"CR": "B", "CL": "B", "PA": "C"}
 
-# Boundaries for Class II-L by category: per level (min, max), None = no bound.
+# Boundaries for Classes II-L and III by category: per level (min, max), None = no bound.
 # Sources: MIL-F-8785C 3.2.2.1.2 (short-period damping, from memory), 3.2.2.1.1 (CAP, from
 # memory), 3.2.1.2 (phugoid, from memory), 3.3.1.1 (Dutch roll), 3.3.1.2 (roll-mode time
 # constant), 3.3.1.3 (spiral time to double). The short-period frequency minimum is the
@@ -128,6 +133,12 @@ def load(path):
         raw = f.read()
     sha256 = hashlib.sha256(raw).hexdigest()
     model = json.loads(raw)
+    units = model.get("units")
+    if units not in GRAVITY:
+        raise SystemExit(f"{path}: units must be SI or US, found {units!r}")
+    aircraft_class = model.get("aircraft", {}).get("class")
+    if aircraft_class not in CLASSES:
+        raise SystemExit(f"{path}: aircraft class {aircraft_class!r}: this reference holds the boundaries of classes {', '.join(CLASSES)} only")
     rows, kept, skipped = [], [], []
     for c in model["conditions"]:
         ss = c.get("stateSpace")
@@ -312,8 +323,10 @@ def main(argv):
         return 2
     model, sha256, a, kept, skipped = load(argv[1])
     values, participation, long_share = analyse(a)
-    # n/alpha = -V Z_w / g [g/rad], from the w row of A (column 1 of the canonical order).
-    n_alpha = -np.array([c["airspeed"] for c in kept]) * a[:, 1, 1] / G if len(kept) else np.zeros(0)
+    # n/alpha = -V Z_w / g [g/rad], from the w row of A (column 1 of the canonical order);
+    # V and g in the file's units.
+    g = model.get("gravity", GRAVITY[model["units"]])
+    n_alpha = -np.array([c["airspeed"] for c in kept]) * a[:, 1, 1] / g if len(kept) else np.zeros(0)
 
     conditions = []
     summary = {"pass": 0, "marginal": 0, "fail": 0, "not_evaluated": 0}
