@@ -11,6 +11,7 @@ import { runCheck, type CheckOutcome } from './check.js';
 import { hasIssue } from './report/condition-status.js';
 import { INDENT_UP_TO_CONDITIONS } from './report/json.js';
 import { ResultsJsonFile } from './report/results-json-file.js';
+import { JunitFile } from './report/junit-file.js';
 import type { ConditionResult, ResultsHead } from './types.js';
 import { compareResults } from './compare/compare-results.js';
 import { formatComparisonText } from './compare/format-comparison.js';
@@ -20,7 +21,7 @@ import { InputError } from './errors.js';
 import { loadCriteriaSet } from './load/criteria-file.js';
 import { BASELINE_LIMIT_BYTES, readInputFile } from './load/read-file.js';
 import { checkOutputPaths, checkOutputsAreNotInputs, renderOutputs, writeArtifacts, type OutputPath, type OutputRequest } from './outputs.js';
-import { OutputSetError, removeLiveTemporaries } from './report/write-atomic.js';
+import { OutputSetError, realTarget, removeLiveTemporaries, targetKind, type PreparedFile } from './report/write-atomic.js';
 import { formatResultsText } from './report/terminal.js';
 import { progressReporter } from './progress.js';
 import { visible, visibleLines } from './visible-text.js';
@@ -151,12 +152,14 @@ async function checkCommand(modelPath: string, opts: CheckCommandOptions, argv: 
   const outputs = outputPaths(modelPath, opts);
   await checkOutputPaths(outputs);
   const baselineInput = baseline ? [{ role: 'baseline' as const, path: baseline.path, sha256: baseline.sha256 }] : [];
-  // A large sweep written only to JSON (and the terminal) is written out as it is checked;
-  // only the conditions the terminal lists are kept whole. The report, JUnit and a comparison
-  // need every result, so with any of them the results are kept and written at the end.
+  // The results JSON of a large sweep and the JUnit file are written as the conditions are
+  // checked (to regular files; a device is written through at the end), and only the
+  // conditions the terminal lists are kept whole. The report and a comparison need every
+  // result, so with either of them the results are kept and every output written at the end.
   const detailFor = (total: number) => opts.detail ?? (total > LARGE_RUN ? 'issues' : 'all');
-  const streamable = opts.json !== undefined && opts.html === undefined && opts.pdf === undefined && opts.junit === undefined && !baseline;
-  let stream: ResultsJsonFile | undefined;
+  const streamable = opts.html === undefined && opts.pdf === undefined && !baseline;
+  const streamsTo = (path: string | undefined): path is string => streamable && path !== undefined && targetKind(realTarget(path)) !== 'device';
+  const streams: Streams = {};
   const progress = progressReporter();
   try {
     const outcome = await runCheck({
@@ -167,21 +170,36 @@ async function checkCommand(modelPath: string, opts: CheckCommandOptions, argv: 
       onProgress: progress.onProgress,
       onStart: (head: ResultsHead, total: number) => {
         checkOutputsAreNotInputs(outputs, [...head.inputs, ...baselineInput]);
-        if (streamable && total > INDENT_UP_TO_CONDITIONS) stream = ResultsJsonFile.open(opts.json!, head);
+        if (streamsTo(opts.json) && total > INDENT_UP_TO_CONDITIONS) streams.json = ResultsJsonFile.open(opts.json, head);
+        if (streamsTo(opts.junit)) streams.junit = JunitFile.open(opts.junit, head.aircraft.name, { failOn: opts.failOn });
       },
       ...(streamable
         ? {
-            onCondition: (r: ConditionResult) => stream?.add(r),
-            keep: (r: ConditionResult, total: number) => stream === undefined || keepFor(detailFor(total), r),
+            onCondition: (r: ConditionResult) => {
+              streams.json?.add(r);
+              streams.junit?.add(r);
+            },
+            // an output written at the end needs every condition
+            keep: (r: ConditionResult, total: number) =>
+              (opts.json !== undefined && streams.json === undefined) ||
+              (opts.junit !== undefined && streams.junit === undefined) ||
+              keepFor(detailFor(total), r),
           }
         : {}),
     }).finally(progress.stop);
-    return await reportCheck(outcome, { modelPath, opts, baseline, detail: detailFor(outcome.conditionCount), stream }, io);
+    return await reportCheck(outcome, { modelPath, opts, baseline, detail: detailFor(outcome.conditionCount), streams }, io);
   } catch (err) {
-    // a results file begun during the check is dropped; the last good one stays in place
-    stream?.abort();
+    // files begun during the check are dropped; the last good ones stay in place
+    streams.json?.abort();
+    streams.junit?.abort();
     throw err;
   }
+}
+
+/** The outputs being written as the conditions are checked, if any. */
+interface Streams {
+  json?: ResultsJsonFile;
+  junit?: JunitFile;
 }
 
 interface ReportContext {
@@ -189,12 +207,12 @@ interface ReportContext {
   opts: CheckCommandOptions;
   baseline: Awaited<ReturnType<typeof readInputFile>> | undefined;
   detail: 'all' | 'issues' | 'none';
-  /** the results file being written as the conditions were checked, if so */
-  stream: ResultsJsonFile | undefined;
+  /** the outputs written as the conditions were checked */
+  streams: Streams;
 }
 
 async function reportCheck(outcome: CheckOutcome, context: ReportContext, io: Io): Promise<number> {
-  const { modelPath, opts, baseline, detail, stream } = context;
+  const { modelPath, opts, baseline, detail, streams } = context;
   if (baseline) outcome.results.inputs.push({ role: 'baseline', path: baseline.path, sha256: baseline.sha256 });
   const comparison = baseline ? compareResults(outcome.results, parseBaselineResults(baseline.text, baseline.path)) : undefined;
 
@@ -208,33 +226,32 @@ async function reportCheck(outcome: CheckOutcome, context: ReportContext, io: Io
   const request: OutputRequest = {
     ...(html ? { html } : {}),
     ...(opts.pdf !== undefined ? { pdf: opts.pdf } : {}),
-    ...(opts.json !== undefined && !stream ? { json: opts.json } : {}),
-    ...(opts.junit !== undefined ? { junit: opts.junit } : {}),
+    ...(opts.json !== undefined && !streams.json ? { json: opts.json } : {}),
+    ...(opts.junit !== undefined && !streams.junit ? { junit: opts.junit } : {}),
     ...(opts.browser ? { browser: opts.browser } : {}),
     ...(comparison ? { comparison } : {}),
     paper: opts.paper,
     failOn: opts.failOn,
     detail,
   };
-  await writeAndTell(outcome, request, io);
-  if (stream) {
-    const file = stream;
-    await whileCleaningUpOnSignals(io, () => file.finish(outcome.results.summary));
-    io.out(`wrote JSON ${visible(file.path)}`);
-  }
+  await writeAndTell(outcome, request, io, streams);
 
   const s = outcome.results.summary;
   if (s.fail > 0 || (opts.failOn === 'marginal' && s.marginal > 0)) return EXIT.findingFailed;
   return EXIT.ok;
 }
 
-async function writeAndTell(outcome: CheckOutcome, request: OutputRequest, io: Io): Promise<void> {
-  const artifacts = await whileCleaningUpOnSignals(io, async () => {
+/** Render the outputs and put them in place, with those written during the check, as one set. */
+async function writeAndTell(outcome: CheckOutcome, request: OutputRequest, io: Io, streams: Streams = {}): Promise<void> {
+  const written = await whileCleaningUpOnSignals(io, async () => {
     const rendered = await renderOutputs(outcome, request);
-    await writeArtifacts(rendered);
-    return rendered;
+    const streamed: { kind: string; file: PreparedFile }[] = [];
+    if (streams.json) streamed.push({ kind: 'json', file: streams.json.prepare(outcome.results.summary) });
+    if (streams.junit) streamed.push({ kind: 'junit', file: streams.junit.prepare() });
+    await writeArtifacts(rendered, streamed.map((s) => s.file));
+    return [...rendered, ...streamed.map((s) => ({ kind: s.kind, path: s.file.path }))];
   });
-  for (const a of artifacts) io.out(`wrote ${a.kind.toUpperCase()} ${visible(a.path)}`);
+  for (const a of written) io.out(`wrote ${a.kind.toUpperCase()} ${visible(a.path)}`);
 }
 
 /**

@@ -142,8 +142,9 @@ export function checkOutputsAreNotInputs(outputs: readonly OutputPath[], inputs:
  * all are put in place together (write-atomic.ts), so a failure leaves every earlier output as
  * it was, or names exactly the ones that were replaced.
  */
-export async function writeArtifacts(artifacts: Artifact[]): Promise<void> {
-  const prepared: PreparedFile[] = [];
+/** Write the artifacts and put them in place, with `written` (files already prepared), as one set. */
+export async function writeArtifacts(artifacts: Artifact[], written: readonly PreparedFile[] = []): Promise<void> {
+  const prepared: PreparedFile[] = [...written];
   try {
     for (const a of artifacts) prepared.push(await prepareFile(a.path, a.data));
   } catch (err) {

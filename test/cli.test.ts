@@ -156,9 +156,10 @@ describe('modalgate check', () => {
   });
 });
 
-describe('modalgate check of a large sweep written only to JSON', () => {
-  // 260 conditions of the invented benchmark aircraft: above 200 the file is written as the
-  // conditions are checked (results-json-file.ts) unless another output needs every result.
+describe('modalgate check of a large sweep written to JSON and JUnit', () => {
+  // 260 conditions of the invented benchmark aircraft: above 200 the results file is written
+  // as the conditions are checked (results-json-file.ts), and the JUnit file always is
+  // (junit-file.ts), unless the report or a comparison needs every result.
   const dir = scratch();
   const model = path.join(dir, 'sweep.json');
   execFileSync(process.execPath, [path.join(root, 'bench/make-sweep.mjs'), '--count', '260', '--seed', '11', '--out', model]);
@@ -167,14 +168,24 @@ describe('modalgate check of a large sweep written only to JSON', () => {
   it('writes the same file and terminal text as the run that keeps every result', async () => {
     const streamed = path.join(dir, 'streamed.json');
     const kept = path.join(dir, 'kept.json');
-    const a = await run('check', model, '--json', streamed);
-    const b = await run('check', model, '--json', kept, '--junit', path.join(dir, 'kept.xml'));
+    const a = await run('check', model, '--json', streamed, '--junit', path.join(dir, 'streamed.xml'));
+    // the report needs every result, so this run keeps them all and writes at the end
+    const b = await run('check', model, '--json', kept, '--junit', path.join(dir, 'kept.xml'), '--html', path.join(dir, 'kept.html'));
     expect(a.code).toBe(b.code);
     expect(strip(readFileSync(streamed, 'utf8'))).toBe(strip(readFileSync(kept, 'utf8')));
+    expect(readFileSync(path.join(dir, 'streamed.xml'), 'utf8')).toBe(readFileSync(path.join(dir, 'kept.xml'), 'utf8'));
     const terminal = (out: string) => out.split('\n').filter((l) => !l.startsWith('wrote '));
     expect(terminal(a.out)).toEqual(terminal(b.out));
     expect(a.out).toContain(`wrote JSON ${streamed}`);
+    expect(a.out).toContain(`wrote JUNIT ${path.join(dir, 'streamed.xml')}`);
     expect(a.out).toMatch(/of 260 conditions not listed/);
+  });
+
+  it('writes JUnit alone as it checks, the same file as a run that keeps every result', async () => {
+    const streamed = path.join(dir, 'alone.xml');
+    const a = await run('check', model, '--junit', streamed);
+    expect(a.code).toBe(1); // the sweep has failing findings
+    expect(readFileSync(streamed, 'utf8')).toBe(readFileSync(path.join(dir, 'kept.xml'), 'utf8'));
   });
 
   it('a condition found bad half-way through: exit 2, the last good file untouched, no temporary file left', async () => {
@@ -185,12 +196,15 @@ describe('modalgate check of a large sweep written only to JSON', () => {
     const out = path.join(dir, 'out');
     mkdirSync(out);
     const json = path.join(out, 'results.json');
+    const junit = path.join(out, 'results.xml');
     writeFileSync(json, 'the last good results');
-    const r = await run('check', broken, '--json', json);
+    writeFileSync(junit, 'the last good JUnit');
+    const r = await run('check', broken, '--json', json, '--junit', junit);
     expect(r.code).toBe(2);
     expect(r.err).toMatch(/ZZ/);
     expect(readFileSync(json, 'utf8')).toBe('the last good results');
-    expect(readdirSync(out)).toEqual(['results.json']);
+    expect(readFileSync(junit, 'utf8')).toBe('the last good JUnit');
+    expect(readdirSync(out).sort()).toEqual(['results.json', 'results.xml']);
   });
 });
 

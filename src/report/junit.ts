@@ -12,20 +12,49 @@ export interface JunitOptions {
   failOn: 'fail' | 'marginal';
 }
 
-export function renderJunit(results: Results, options: JunitOptions): string {
-  const aircraft = results.aircraft.name;
-  const suites = results.conditions.map((c) => renderSuite(aircraft, c, options));
-  const totals = { tests: 0, failures: 0, skipped: 0 };
-  for (const s of suites) {
-    totals.tests += s.tests;
-    totals.failures += s.failures;
-    totals.skipped += s.skipped;
-  }
-  const head = `<testsuites ${attrs({ name: `modalgate ${aircraft}`, tests: totals.tests, failures: totals.failures, errors: 0, skipped: totals.skipped, time: 0 })}>`;
-  return ['<?xml version="1.0" encoding="UTF-8"?>', head, ...suites.map((s) => s.xml), '</testsuites>', ''].join('\n');
+/** Test, failure and skipped counts of a suite or of the whole file. */
+export interface JunitTotals {
+  tests: number;
+  failures: number;
+  skipped: number;
 }
 
-function renderSuite(aircraft: string, c: ConditionResult, options: JunitOptions) {
+export interface JunitSuite extends JunitTotals {
+  /** the suite's lines, without a final newline */
+  xml: string;
+}
+
+/** The first line of the file. */
+export const JUNIT_DECLARATION = '<?xml version="1.0" encoding="UTF-8"?>';
+/** The last line of the file. */
+export const JUNIT_CLOSE = '</testsuites>';
+
+/**
+ * The file: the declaration, the root element's start tag with the totals, one suite per
+ * condition, the end tag, each on its own line. junit-file.ts writes the same lines as the
+ * conditions are checked.
+ */
+export function renderJunit(results: Results, options: JunitOptions): string {
+  const aircraft = results.aircraft.name;
+  const suites = results.conditions.map((c) => renderJunitSuite(aircraft, c, options));
+  const totals: JunitTotals = { tests: 0, failures: 0, skipped: 0 };
+  for (const s of suites) addJunitTotals(totals, s);
+  return [JUNIT_DECLARATION, junitRoot(aircraft, totals), ...suites.map((s) => s.xml), JUNIT_CLOSE, ''].join('\n');
+}
+
+/** The root element's start tag. */
+export function junitRoot(aircraft: string, totals: JunitTotals): string {
+  return `<testsuites ${attrs({ name: `modalgate ${aircraft}`, tests: totals.tests, failures: totals.failures, errors: 0, skipped: totals.skipped, time: 0 })}>`;
+}
+
+export function addJunitTotals(into: JunitTotals, suite: JunitTotals): void {
+  into.tests += suite.tests;
+  into.failures += suite.failures;
+  into.skipped += suite.skipped;
+}
+
+/** One condition's suite. */
+export function renderJunitSuite(aircraft: string, c: ConditionResult, options: JunitOptions): JunitSuite {
   const classname = `${aircraft}.${c.id}`;
   let failures = 0;
   let skipped = 0;
