@@ -6,7 +6,7 @@
 import { dedupeIssues, InputError } from './errors.js';
 import { loadCriteriaSet } from './load/criteria-file.js';
 import { loadModel } from './load/load-model.js';
-import { assembleResults, resultsHead } from './results.js';
+import { assembleResults, resultsContents, resultsHead } from './results.js';
 import { checkAllConditions } from './sweep/check-all.js';
 import type { AircraftModel, ConditionResult, InputFile, ResolvedCriteriaSet, Results, ResultsHead } from './types.js';
 
@@ -23,6 +23,11 @@ export interface CheckRequest {
   generatedAt: string;
   /** called after each condition (for a progress bar); no effect on the results */
   onProgress?: (done: number, total: number) => void;
+  /**
+   * Whether the results carry each mode's shape: true = always, false = never, absent = up to
+   * MODE_SHAPES_UP_TO conditions (results.ts). `results.contents` says which it was.
+   */
+  modeShapes?: boolean;
   /** worker threads for the conditions: 0 = none; absent = chosen by their number (no effect on the results) */
   workers?: number;
   /**
@@ -63,11 +68,12 @@ export async function runCheck(request: CheckRequest): Promise<CheckOutcome> {
     ...loaded.flatMap((l) => l.files.map((f) => ({ role: 'criteria' as const, path: f.path, sha256: f.sha256 }))),
   ];
   const total = model.conditions.length;
-  request.onStart?.(resultsHead({ request, model, sets, inputs }), total);
+  const contents = resultsContents(total, request.modeShapes);
+  request.onStart?.(resultsHead({ request, model, sets, inputs, contents }), total);
 
   // per condition: analyse the modes, evaluate every set, assemble (worker threads for a big sweep)
   const { onCondition, keep } = request;
-  const { results: conditions, issues, summary } = await checkAllConditions(model, sets, {
+  const { results: conditions, issues, summary } = await checkAllConditions(model, sets, contents, {
     ...(request.workers !== undefined ? { workers: request.workers } : {}),
     ...(request.onProgress ? { onProgress: request.onProgress } : {}),
     ...(onCondition ? { onResult: (r: ConditionResult) => onCondition(r, total) } : {}),
@@ -75,6 +81,6 @@ export async function runCheck(request: CheckRequest): Promise<CheckOutcome> {
   });
   if (issues.length > 0) throw new InputError(dedupeIssues(issues));
 
-  const results = assembleResults({ request, model, sets, inputs, conditions, summary });
+  const results = assembleResults({ request, model, sets, inputs, contents, conditions, summary });
   return { model, sets, results, conditionCount: total };
 }

@@ -8,6 +8,7 @@ import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { Command, CommanderError, Option } from 'commander';
 import { runCheck, type CheckOutcome } from './check.js';
+import { MODE_SHAPES_UP_TO } from './results.js';
 import { hasIssue } from './report/condition-status.js';
 import { INDENT_UP_TO_CONDITIONS } from './report/json.js';
 import { ResultsJsonFile } from './report/results-json-file.js';
@@ -69,6 +70,7 @@ export async function main(argv: string[], io: Io = defaultIo()): Promise<number
     .option('--pdf <file>', 'write the PDF review document (needs Chromium)')
     .option('--json <file>', 'write results JSON (modalgate-results/1)')
     .option('--junit <file>', 'write JUnit XML, one test case per condition and criterion')
+    .option('--mode-shapes', `write each mode's shape in the results JSON of a sweep too (left out above ${MODE_SHAPES_UP_TO} conditions)`)
     .option('--baseline <results.json>', 'compare with the results of an earlier run')
     .addOption(new Option('--fail-on <verdict>', 'lowest verdict that makes the exit code 1').choices(['fail', 'marginal']).default('fail'))
     .addOption(new Option('--paper <size>', 'PDF paper size').choices(['A4', 'Letter']).default('A4'))
@@ -85,7 +87,8 @@ export async function main(argv: string[], io: Io = defaultIo()): Promise<number
     .argument('<model>', 'model file (modalgate-model/1, YAML or JSON)')
     .option('--json <file>', 'write results JSON (modes only, no findings)')
     .option('--trust-folder <folder>', 'a folder besides the model\'s own whose files the model may name (repeatable)', collect, [])
-    .action(async (modelPath: string, opts: { json?: string; trustFolder: string[] }) => {
+    .option('--mode-shapes', `write each mode's shape in the results JSON of a sweep too (left out above ${MODE_SHAPES_UP_TO} conditions)`)
+    .action(async (modelPath: string, opts: { json?: string; trustFolder: string[]; modeShapes?: boolean }) => {
       const outputs: OutputPath[] = opts.json !== undefined ? [{ option: '--json', path: opts.json }] : [];
       await checkOutputPaths(outputs);
       const outcome = await runCheck({
@@ -93,8 +96,10 @@ export async function main(argv: string[], io: Io = defaultIo()): Promise<number
         criteria: [],
         trustedFolders: opts.trustFolder,
         ...runContext(argv, io),
+        ...(opts.modeShapes ? { modeShapes: true } : {}),
         onStart: (head) => checkOutputsAreNotInputs(outputs, head.inputs),
       });
+      if (opts.json !== undefined) tellModeShapes(outcome, io);
       io.out(formatResultsText(outcome.results, { color: io.color, detail: 'all', findings: false }));
       await writeAndTell(outcome, { ...(opts.json !== undefined ? { json: opts.json } : {}), paper: 'A4', failOn: 'fail', detail: 'all' }, io);
     });
@@ -134,6 +139,7 @@ interface CheckCommandOptions {
   pdf?: string;
   json?: string;
   junit?: string;
+  modeShapes?: boolean;
   baseline?: string;
   failOn: 'fail' | 'marginal';
   paper: 'A4' | 'Letter';
@@ -167,6 +173,7 @@ async function checkCommand(modelPath: string, opts: CheckCommandOptions, argv: 
       criteria,
       trustedFolders: opts.trustFolder,
       ...runContext(argv, io),
+      ...(opts.modeShapes ? { modeShapes: true } : {}),
       onProgress: progress.onProgress,
       onStart: (head: ResultsHead, total: number) => {
         checkOutputsAreNotInputs(outputs, [...head.inputs, ...baselineInput]);
@@ -218,6 +225,7 @@ async function reportCheck(outcome: CheckOutcome, context: ReportContext, io: Io
 
   const total = outcome.conditionCount;
   if (!opts.detail && total > LARGE_RUN) io.out(`${total} conditions: per-condition detail limited to conditions with issues (--detail all to list every one)`);
+  if (opts.json) tellModeShapes(outcome, io);
 
   const html = outputPaths(modelPath, opts).find((o) => o.option === '--html')?.path;
   io.out(formatResultsText(outcome.results, { color: io.color, detail, findings: true, conditionCount: total }));
@@ -288,6 +296,12 @@ function outputPaths(modelPath: string, opts: CheckCommandOptions): OutputPath[]
     if (path !== undefined) named.push({ option: `--${option}`, path });
   }
   return named.length > 0 ? named : [{ option: '--html', path: defaultHtmlPath(modelPath) }];
+}
+
+/** A default the user did not ask for is said: mode shapes left out of a sweep's results. */
+function tellModeShapes(outcome: CheckOutcome, io: Io): void {
+  if (outcome.results.contents.modeShapes) return;
+  io.out(`${outcome.conditionCount} conditions: mode shapes left out of the results JSON (more than ${MODE_SHAPES_UP_TO} conditions; --mode-shapes to write them)`);
 }
 
 function runContext(argv: string[], io: Io) {

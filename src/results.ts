@@ -7,16 +7,32 @@ import type {
   FlightCondition,
   InputFile,
   ModalAnalysis,
+  Mode,
   ResolvedCriteriaSet,
+  ResultMode,
   Results,
+  ResultsContents,
   ResultsHead,
   VerdictCounts,
 } from './types.js';
+
+/**
+ * Above this many conditions the results leave the mode shapes out unless asked for (a third
+ * of a sweep's results file: 42 of 122 MB on the 10,000-condition bench sweep); it is the
+ * size above which the results file is written in its compact sweep form.
+ */
+export const MODE_SHAPES_UP_TO = 200;
+
+/** What results of `total` conditions hold: mode shapes when asked (`modeShapes`), else up to MODE_SHAPES_UP_TO. */
+export function resultsContents(total: number, modeShapes: boolean | undefined): ResultsContents {
+  return { modeShapes: modeShapes ?? total <= MODE_SHAPES_UP_TO };
+}
 
 export function assembleCondition(
   condition: FlightCondition,
   analysis: ModalAnalysis,
   evaluations: ConditionEvaluation[],
+  contents: ResultsContents,
 ): ConditionResult {
   const first = evaluations[0];
   const requiredLevel = first?.requiredLevel ?? condition.requiredLevel;
@@ -34,12 +50,17 @@ export function assembleCondition(
     form: condition.form,
     subsystems: analysis.subsystems,
     coupling: analysis.coupling,
-    modes: analysis.modes,
+    modes: contents.modeShapes ? analysis.modes : analysis.modes.map(withoutShape),
     findings: evaluations.flatMap((e) => e.findings),
     notApplicable: evaluations.flatMap((e) => e.notApplicable),
     warnings,
     notes: condition.notes,
   };
+}
+
+function withoutShape(mode: Mode): ResultMode {
+  const { referenceState: _referenceState, shape: _shape, ...rest } = mode;
+  return rest;
 }
 
 export function countVerdicts(findings: Iterable<Finding>): VerdictCounts {
@@ -65,6 +86,7 @@ export interface ResultsParts {
   model: AircraftModel;
   sets: ResolvedCriteriaSet[];
   inputs: InputFile[];
+  contents: ResultsContents;
 }
 
 /** Everything of the results but the summary and the conditions, in the results' key order. */
@@ -77,6 +99,7 @@ export function resultsHead(parts: ResultsParts): ResultsHead {
     inputs: parts.inputs,
     aircraft: { ...parts.model.aircraft },
     criteriaSets: parts.sets.map((s) => ({ id: s.id, title: s.title, chain: s.chain, sources: s.sources })),
+    contents: parts.contents,
   };
 }
 

@@ -150,6 +150,13 @@ export interface Mode {
   shape: StateShare[];
 }
 
+/**
+ * A mode as the results hold it: the mode shape (`referenceState`, `shape`) is there only when
+ * the results say so (`Results.contents.modeShapes`); a sweep's results leave it out unless
+ * asked, as it is about a third of the file and only the file ever shows it.
+ */
+export type ResultMode = Omit<Mode, 'referenceState' | 'shape'> & Partial<Pick<Mode, 'referenceState' | 'shape'>>;
+
 export interface Subsystems {
   longitudinal: string[];
   lateral: string[];
@@ -252,7 +259,7 @@ export interface ConditionResult {
   form: DynamicsForm;
   subsystems: Subsystems;
   coupling: number;
-  modes: Mode[];
+  modes: ResultMode[];
   findings: Finding[];
   /** applicable criteria that make no finding here, with the reason */
   notApplicable: NotApplicable[];
@@ -284,8 +291,15 @@ export interface Results {
   inputs: InputFile[];
   aircraft: { name: string; class: AircraftClass };
   criteriaSets: { id: string; title: string; chain: string[]; sources: SourceEntry[] }[];
+  /** what the results hold beyond the always-present fields */
+  contents: ResultsContents;
   summary: VerdictCounts;
   conditions: ConditionResult[];
+}
+
+export interface ResultsContents {
+  /** whether each mode carries its shape (`referenceState`, `shape`) */
+  modeShapes: boolean;
 }
 
 /** The results without their summary and conditions: all that is known before the check. */

@@ -149,6 +149,9 @@ describe('modalgate check', () => {
     await run('check', sample, '--junit', junit, '--json', json);
     const xml = readFileSync(junit, 'utf8');
     const results = JSON.parse(readFileSync(json, 'utf8'));
+    // a run of a few conditions keeps the mode shapes, and the file says so
+    expect(results.contents).toEqual({ modeShapes: true });
+    expect(results.conditions[0].modes[0].shape.length).toBeGreaterThan(0);
     const findings = results.conditions.flatMap((c: { findings: unknown[] }) => c.findings);
     expect(xml.startsWith('<?xml')).toBe(true);
     expect((xml.match(/<testcase /g) ?? []).length).toBe(findings.length);
@@ -179,6 +182,28 @@ describe('modalgate check of a large sweep written to JSON and JUnit', () => {
     expect(a.out).toContain(`wrote JSON ${streamed}`);
     expect(a.out).toContain(`wrote JUNIT ${path.join(dir, 'streamed.xml')}`);
     expect(a.out).toMatch(/of 260 conditions not listed/);
+    expect(a.out).toContain('260 conditions: mode shapes left out of the results JSON (more than 200 conditions; --mode-shapes to write them)');
+  });
+
+  it('leaves the mode shapes out of a sweep\'s results and says so in the file and the terminal; --mode-shapes writes them', async () => {
+    const without = JSON.parse(readFileSync(path.join(dir, 'streamed.json'), 'utf8'));
+    expect(without.contents).toEqual({ modeShapes: false });
+    const modes = without.conditions.flatMap((c: { modes: object[] }) => c.modes);
+    expect(modes.length).toBeGreaterThan(1000);
+    expect(modes.some((m: object) => 'shape' in m || 'referenceState' in m)).toBe(false);
+
+    const withShapes = path.join(dir, 'shapes.json');
+    const r = await run('check', model, '--json', withShapes, '--mode-shapes');
+    expect(r.out).not.toMatch(/mode shapes left out/);
+    const full = JSON.parse(readFileSync(withShapes, 'utf8'));
+    expect(full.contents).toEqual({ modeShapes: true });
+    expect(full.conditions[0].modes[0].shape.length).toBeGreaterThan(0);
+    // the same results but for the shapes (and the command line that asked for them)
+    for (const c of full.conditions) for (const m of c.modes) {
+      delete m.shape;
+      delete m.referenceState;
+    }
+    expect({ ...full, command: [], contents: null }).toEqual({ ...without, command: [], contents: null });
   });
 
   it('writes JUnit alone as it checks, the same file as a run that keeps every result', async () => {

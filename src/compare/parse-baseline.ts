@@ -12,7 +12,7 @@ import { parseStructuredText } from '../load/structured-text.js';
 import { issuesFromZod } from '../load/zod-issues.js';
 import { countVerdicts } from '../results.js';
 import { evidenceClasses, sourceKinds } from '../load/criteria-schema.js';
-import type { ConditionResult, Finding, Mode, Results } from '../types.js';
+import type { ConditionResult, Finding, ResultMode, Results } from '../types.js';
 
 const modeKind = z.enum(['short_period', 'phugoid', 'dutch_roll', 'roll', 'spiral', 'roll_spiral', 'kinematic', 'other']);
 const quantity = z.enum(['damping_ratio', 'natural_frequency', 'cap', 'damping_frequency_product', 'time_to_double', 'time_constant']);
@@ -35,7 +35,6 @@ const modeSchema = z.object({
   cyclesToHalf: figure.optional(),
   basis: z.string().optional(),
   ambiguous: z.boolean().optional(),
-  referenceState: z.string().optional(),
 });
 
 const findingSchema = z.object({
@@ -155,6 +154,8 @@ export function parseBaselineResults(text: string, file: string): Results {
       chain: s.chain ?? [s.id],
       sources: (s.sources ?? []).map((x) => ({ ...x })),
     })),
+    // the comparison reads no mode shapes, so none are taken from the baseline
+    contents: { modeShapes: false },
     summary,
     conditions,
   };
@@ -186,7 +187,7 @@ function toConditionResult(c: WrittenCondition): ConditionResult {
     ...(f.method !== undefined ? { method: f.method } : {}),
   }));
   if (legacy) missing.push('findings[].evidence (taken from `confidence`: published as secondary, otherwise memory)');
-  const modes: Mode[] = c.modes.map((m) => ({
+  const modes: ResultMode[] = c.modes.map((m) => ({
     kind: m.kind,
     eigenvalues: m.eigenvalues,
     naturalFrequency: m.naturalFrequency,
@@ -199,8 +200,6 @@ function toConditionResult(c: WrittenCondition): ConditionResult {
     cyclesToHalf: m.cyclesToHalf ?? null,
     basis: m.basis ?? '',
     ambiguous: m.ambiguous ?? false,
-    referenceState: m.referenceState ?? '',
-    shape: [],
   }));
   const result: ConditionResult = {
     id: c.id,

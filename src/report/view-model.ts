@@ -6,7 +6,7 @@ import type { Comparison } from '../compare/compare-results.js';
 import { countVerdicts } from '../results.js';
 import { EVIDENCE_ORDER, weaker } from '../criteria/evidence.js';
 import type {
-  ConditionResult, DynamicsForm, EvidenceClass, Finding, Mode, ResolvedCriteriaSet, Results, SourceEntry, VerdictCounts,
+  ConditionResult, DynamicsForm, EvidenceClass, Finding, ResolvedCriteriaSet, ResultMode, Results, SourceEntry, VerdictCounts,
 } from '../types.js';
 import { EVIDENCE_MEANING, evidenceGroups, levelClassesText } from './evidence-text.js';
 import { STANDING_CAUTIONS } from './cautions.js';
@@ -64,7 +64,7 @@ function tallyOf(counts: VerdictCounts): VerdictTally[] {
 
 const STABILITY_WORD: Record<Stability, string> = { convergent: 'convergent', neutral: 'neutral', divergent: 'divergent' };
 
-function modeRow(mode: Mode, c: ConditionResult): ModeRow {
+function modeRow(mode: ResultMode, c: ConditionResult): ModeRow {
   // A real root has no damping ratio or natural frequency to show; a divergent one no time
   // constant either (it would be negative): its time to double says how fast it grows.
   const real = isRealMode(mode);

@@ -10,7 +10,7 @@
  * large sweeps on machines with spare cores, and `workers` forces either way.
  */
 import { availableParallelism } from 'node:os';
-import type { AircraftModel, ResolvedCriteriaSet } from '../types.js';
+import type { AircraftModel, ResolvedCriteriaSet, ResultsContents } from '../types.js';
 import { checkConditions, type CheckEach, type ConditionsChecked } from './check-conditions.js';
 import { checkConditionsInWorkers } from './worker-pool.js';
 
@@ -42,6 +42,7 @@ export function workersFor(count: number, cores: number = availableParallelism()
 export async function checkAllConditions(
   model: AircraftModel,
   sets: readonly ResolvedCriteriaSet[],
+  contents: ResultsContents,
   options: CheckAllOptions = {},
 ): Promise<ConditionsChecked> {
   const { conditions } = model;
@@ -50,13 +51,13 @@ export async function checkAllConditions(
   const total = conditions.length;
   if (workers === 0) {
     const onEach = options.onProgress ? (done: number) => options.onProgress!(done, total) : undefined;
-    return checkConditions(conditions, model.aircraft.class, sets, {
+    return checkConditions(conditions, model.aircraft.class, sets, contents, {
       ...(onEach ? { onEach } : {}),
       ...(options.onResult ? { onResult: options.onResult } : {}),
       ...(options.keep ? { keep: options.keep } : {}),
     });
   }
-  return checkConditionsInWorkers(conditions, model.aircraft.class, sets, {
+  return checkConditionsInWorkers(conditions, model.aircraft.class, sets, contents, {
     workers,
     ...(options.onProgress ? { onProgress: options.onProgress } : {}),
   });

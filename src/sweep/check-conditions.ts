@@ -7,7 +7,7 @@ import { evaluateCondition } from '../criteria/evaluate.js';
 import { InputError, type InputIssue } from '../errors.js';
 import { analyseModes } from '../modes/analyse.js';
 import { assembleCondition } from '../results.js';
-import type { AircraftClass, ConditionResult, FlightCondition, ResolvedCriteriaSet, VerdictCounts } from '../types.js';
+import type { AircraftClass, ConditionResult, FlightCondition, ResolvedCriteriaSet, ResultsContents, VerdictCounts } from '../types.js';
 
 export interface ConditionsChecked {
   /** one per condition, in the order given (only those kept, when a `keep` test was given) */
@@ -31,6 +31,7 @@ export function checkConditions(
   conditions: readonly FlightCondition[],
   aircraftClass: AircraftClass,
   sets: readonly ResolvedCriteriaSet[],
+  contents: ResultsContents,
   each: CheckEach = {},
 ): ConditionsChecked {
   const results: ConditionResult[] = [];
@@ -38,7 +39,7 @@ export function checkConditions(
   const summary: VerdictCounts = { pass: 0, marginal: 0, fail: 0, not_evaluated: 0 };
   const { onEach, onResult, keep } = each;
   for (let index = 0; index < conditions.length; index += 1) {
-    const result = checkOneCondition(conditions[index]!, aircraftClass, sets, issues);
+    const result = checkOneCondition(conditions[index]!, aircraftClass, sets, contents, issues);
     for (const f of result.findings) summary[f.verdict] += 1;
     onResult?.(result);
     if (keep === undefined || keep(result)) results.push(result);
@@ -52,6 +53,7 @@ export function checkOneCondition(
   condition: FlightCondition,
   aircraftClass: AircraftClass,
   sets: readonly ResolvedCriteriaSet[],
+  contents: ResultsContents,
   issues: InputIssue[],
 ): ConditionResult {
   const analysis = analyseModes(condition.system, { airspeed: condition.airspeed });
@@ -64,5 +66,5 @@ export function checkOneCondition(
       else throw err;
     }
   }
-  return assembleCondition(condition, analysis, evaluations);
+  return assembleCondition(condition, analysis, evaluations, contents);
 }

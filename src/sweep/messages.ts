@@ -1,12 +1,13 @@
 /** What the main thread and a condition worker say to each other (structured-cloned). */
 import type { InputIssue } from '../errors.js';
-import type { AircraftClass, ConditionResult, FlightCondition, ResolvedCriteriaSet } from '../types.js';
+import type { AircraftClass, ConditionResult, FlightCondition, ResolvedCriteriaSet, ResultsContents } from '../types.js';
 
 /** main -> worker, once: a contiguous share of the sweep's conditions */
 export interface ShareMessage {
   conditions: FlightCondition[];
   aircraftClass: AircraftClass;
   sets: ResolvedCriteriaSet[];
+  contents: ResultsContents;
   /** conditions per batch message sent back */
   batch: number;
 }

@@ -8,7 +8,7 @@ import { Worker } from 'node:worker_threads';
 import { InternalError, type InputIssue } from '../errors.js';
 import { rememberConditionsJson } from '../report/json.js';
 import { addVerdictCounts, countVerdicts } from '../results.js';
-import type { AircraftClass, ConditionResult, FlightCondition, ResolvedCriteriaSet } from '../types.js';
+import type { AircraftClass, ConditionResult, FlightCondition, ResolvedCriteriaSet, ResultsContents } from '../types.js';
 import { checkConditions, type ConditionsChecked } from './check-conditions.js';
 import type { BatchMessage, ShareMessage, WorkerMessage } from './messages.js';
 
@@ -27,6 +27,7 @@ export async function checkConditionsInWorkers(
   conditions: readonly FlightCondition[],
   aircraftClass: AircraftClass,
   sets: readonly ResolvedCriteriaSet[],
+  contents: ResultsContents,
   options: PoolOptions,
 ): Promise<ConditionsChecked> {
   const total = conditions.length;
@@ -40,11 +41,11 @@ export async function checkConditionsInWorkers(
   // The main thread takes the first share itself, while the workers start up.
   const [own, ...rest] = splitShares(total, workers + 1);
   const shares = rest.map(([from, to]) =>
-    runShare({ conditions: conditions.slice(from, to), aircraftClass, sets: [...sets], batch }, progress),
+    runShare({ conditions: conditions.slice(from, to), aircraftClass, sets: [...sets], contents, batch }, progress),
   );
   let mine: ConditionsChecked;
   try {
-    mine = checkConditions(conditions.slice(own![0], own![1]), aircraftClass, sets, { onEach: () => progress(1) });
+    mine = checkConditions(conditions.slice(own![0], own![1]), aircraftClass, sets, contents, { onEach: () => progress(1) });
   } catch (err) {
     for (const share of shares) {
       share.stop();

@@ -70,6 +70,7 @@ export function results(over: Partial<Results> = {}): Results {
     ],
     aircraft: { name: 'Test aircraft', class: 'II-L' },
     criteriaSets: [{ id: 'test-set', title: 'Test set', chain: ['test-set'], sources: [] }],
+    contents: { modeShapes: true },
     summary: { pass: 0, marginal: 0, fail: 0, not_evaluated: 0 },
     conditions: [],
     ...over,

@@ -19,19 +19,23 @@ import { checkConditions } from '../../src/sweep/check-conditions.js';
 import { isJsonSafe } from '../../src/sweep/json-safe.js';
 import { checkConditionsInWorkers, readBatch, splitShares } from '../../src/sweep/worker-pool.js';
 import { workersFor } from '../../src/sweep/check-all.js';
-import type { AircraftModel, ConditionResult, ResolvedCriteriaSet } from '../../src/types.js';
+import type { AircraftModel, ConditionResult, ResolvedCriteriaSet, ResultsContents } from '../../src/types.js';
 import { seeded } from '../../bench/lib/seeded.mjs';
 
 const ROOT = fileURLToPath(new URL('../../', import.meta.url));
+/** results with and without the mode shapes */
+const SHAPES: ResultsContents = { modeShapes: true };
+const NO_SHAPES: ResultsContents = { modeShapes: false };
 
 /** The results file a run of these conditions writes (fixed run data, no inputs). */
-function resultsFile(model: AircraftModel, sets: ResolvedCriteriaSet[], conditions: ConditionResult[]): string {
+function resultsFile(model: AircraftModel, sets: ResolvedCriteriaSet[], conditions: ConditionResult[], contents: ResultsContents = SHAPES): string {
   return renderResultsJson(
     assembleResults({
       request: { toolVersion: 'test', command: ['modalgate'], generatedAt: '2026-01-01T00:00:00.000Z' },
       model,
       sets,
       inputs: [],
+      contents,
       conditions,
     }),
   );
@@ -133,10 +137,10 @@ describe('worker path of a large sweep', () => {
     expect(staleBuilds()).toEqual([]);
   });
 
-  it('gives deep-equal results, in the same order, and the same results file', async () => {
-    const serial = checkConditions(model.conditions, model.aircraft.class, sets);
+  it.each([[SHAPES], [NO_SHAPES]])('gives deep-equal results, in the same order, and the same results file (%o)', async (contents) => {
+    const serial = checkConditions(model.conditions, model.aircraft.class, sets, contents);
     const seen: number[] = [];
-    const parallel = await checkConditionsInWorkers(model.conditions, model.aircraft.class, sets, {
+    const parallel = await checkConditionsInWorkers(model.conditions, model.aircraft.class, sets, contents, {
       workers: 2,
       batch: 128,
       onProgress: (done) => seen.push(done),
@@ -155,13 +159,14 @@ describe('worker path of a large sweep', () => {
     expect(findings.some((f) => f.verdict === 'fail')).toBe(true);
     expect(serial.results.some((r) => r.warnings.length > 0)).toBe(true);
 
-    expect(resultsFile(model, sets, parallel.results)).toBe(resultsFile(model, sets, serial.results));
+    expect(resultsFile(model, sets, parallel.results, contents)).toBe(resultsFile(model, sets, serial.results, contents));
+    expect(serial.results.every((r) => r.modes.every((m) => (m.shape !== undefined) === contents.modeShapes))).toBe(true);
   });
 
   it('reports an input problem of a worker share as the serial path does', async () => {
     const withUnknownPhase = { ...model, conditions: model.conditions.slice(0, 40).map((c, i) => (i === 33 ? { ...c, phase: 'ZZ' } : c)) };
-    const serial = checkConditions(withUnknownPhase.conditions, model.aircraft.class, sets);
-    const parallel = await checkConditionsInWorkers(withUnknownPhase.conditions, model.aircraft.class, sets, { workers: 2, batch: 7 });
+    const serial = checkConditions(withUnknownPhase.conditions, model.aircraft.class, sets, SHAPES);
+    const parallel = await checkConditionsInWorkers(withUnknownPhase.conditions, model.aircraft.class, sets, SHAPES, { workers: 2, batch: 7 });
     expect(serial.issues.map((i) => i.code)).toEqual(['unknown_phase']);
     expect(parallel.issues).toEqual(serial.issues);
     expect(parallel.results).toStrictEqual(serial.results);
@@ -172,15 +177,15 @@ describe('reading a batch back from a worker', () => {
   it('takes a result that JSON would change from its structured clone, and keeps the lines for the file', async () => {
     const model = grebeModel(250);
     const sets = [(await loadCriteriaSet('mil-f-8785c')).set];
-    const { results } = checkConditions(model.conditions, model.aircraft.class, sets);
+    const { results } = checkConditions(model.conditions, model.aircraft.class, sets, SHAPES);
     // a -0 (e.g. a phase) is lost in JSON text: such a result travels as a clone
     const odd = structuredClone(results[1]!);
-    odd.modes[0]!.shape[0]!.phase = -0;
+    odd.modes[0]!.shape![0]!.phase = -0;
     const sent = [results[0]!, odd, ...results.slice(2)];
     const text = `[${sent.map((r) => JSON.stringify(r)).join(',\n')}]`;
     const back = readBatch({ text, exact: [[1, structuredClone(odd)]] });
     expect(back).toStrictEqual(sent);
-    expect(Object.is(back[1]!.modes[0]!.shape[0]!.phase, -0)).toBe(true);
+    expect(Object.is(back[1]!.modes[0]!.shape![0]!.phase, -0)).toBe(true);
     expect(resultsFile(model, sets, back)).toBe(resultsFile(model, sets, sent));
   });
 });

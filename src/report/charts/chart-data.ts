@@ -3,7 +3,7 @@
  * point and, per level, the bounds of the findings that draw the regions. Charts never read
  * the criteria files: the regions are exactly the bounds the verdicts were judged against.
  */
-import type { Bound, ConditionResult, Finding, Level, Mode, ModeKind, Quantity } from '../../types.js';
+import type { Bound, ConditionResult, Finding, Level, ResultMode, ModeKind, Quantity } from '../../types.js';
 
 export const LEVELS: readonly Level[] = [1, 2, 3];
 
@@ -13,7 +13,7 @@ export function findingFor(condition: ConditionResult, mode: ModeKind, quantity:
   return candidates.find((f) => Object.keys(f.bounds).length > 0) ?? candidates[0];
 }
 
-export function modeOf(condition: ConditionResult, kind: ModeKind): Mode | undefined {
+export function modeOf(condition: ConditionResult, kind: ModeKind): ResultMode | undefined {
   return condition.modes.find((m) => m.kind === kind);
 }
 

@@ -6,7 +6,7 @@
  * Slow poles (phugoid, spiral) crowd the origin; a second panel shows them enlarged.
  */
 import { scaleLinear } from 'd3-scale';
-import type { ConditionResult, Mode } from '../../types.js';
+import type { ConditionResult, ResultMode } from '../../types.js';
 import { MODE_LABEL } from '../labels.js';
 import {
   type Box, type ChartOutput, type Rect, bottomAxis, clipPath, esc, frameRect, haloText, leftAxis, overlaps, placeLabel, px,
@@ -39,7 +39,7 @@ function equalAspect(box: Box, xr: [number, number], yHalf: number): Domain {
   return { x: [xr[0] - xPad * 0.8, xr[1] + xPad * 0.2], y: [-yNew, yNew] };
 }
 
-function panel(box: Box, domain: Domain, modes: Mode[], unlabelled: readonly Mode[], id: string, hatchId: string, markerClass: string, title: string): string {
+function panel(box: Box, domain: Domain, modes: ResultMode[], unlabelled: readonly ResultMode[], id: string, hatchId: string, markerClass: string, title: string): string {
   const x = scaleLinear().domain(domain.x).range([box.left, box.left + box.width]);
   const y = scaleLinear().domain(domain.y).range([box.top + box.height, box.top]);
   const out: string[] = [`<g class="s-plane-panel">`];

@@ -4,7 +4,7 @@
  * one boundary holds for every condition. Picked from the results only, so a point is exactly
  * the judged figure.
  */
-import type { Bound, ConditionResult, Finding, Mode, ModeKind, Quantity, Verdict } from '../../types.js';
+import type { Bound, ConditionResult, Finding, ResultMode, ModeKind, Quantity, Verdict } from '../../types.js';
 import { worstVerdict } from '../verdict-marks.js';
 
 export interface KeyFigure {
@@ -15,7 +15,7 @@ export interface KeyFigure {
   mode: ModeKind;
   quantity: Quantity;
   /** the figure from the mode when no finding carries it (null: only findings carry it) */
-  fromMode: ((m: Mode) => number | null) | null;
+  fromMode: ((m: ResultMode) => number | null) | null;
 }
 
 export const KEY_FIGURES: readonly KeyFigure[] = [
