@@ -4,6 +4,7 @@
  * JUnit, HTML, PDF) take the results from here; nothing in this file prints or writes.
  */
 import { dedupeIssues, InputError } from './errors.js';
+import { checkSourceIdsAgree } from './criteria/evidence.js';
 import { loadCriteriaSet } from './load/criteria-file.js';
 import { loadModel } from './load/load-model.js';
 import { assembleResults, resultsContents, resultsHead } from './results.js';
@@ -62,6 +63,7 @@ export async function runCheck(request: CheckRequest): Promise<CheckOutcome> {
   const { model, files: modelFiles } = await loadModel(request.model, { trustedFolders: request.trustedFolders ?? [] });
   const loaded = await Promise.all(request.criteria.map((ref) => loadCriteriaSet(ref)));
   const sets = loaded.map((l) => l.set);
+  checkSourceIdsAgree(sets);
 
   const inputs: InputFile[] = [
     ...modelFiles,

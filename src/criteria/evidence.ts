@@ -2,7 +2,10 @@
  * Evidence of boundaries: what each class asks of its citations, how a finding's evidence is
  * taken from its criterion, and how classes rank when two boundaries combine. Pure.
  */
-import type { Citation, Evidence, EvidenceClass, FindingEvidence, Level, ResolvedCriterion, SourceEntry } from '../types.js';
+import { InputError, type InputIssue } from '../errors.js';
+import type {
+  Citation, Evidence, EvidenceClass, FindingEvidence, Level, ResolvedCriteriaSet, ResolvedCriterion, SourceEntry,
+} from '../types.js';
 import { levelKey } from './level-bounds.js';
 
 /** From the strongest to the weakest: a combined boundary is as weak as its weakest part. */
@@ -83,4 +86,28 @@ export function findingEvidence(c: ResolvedCriterion, requiredLevel: Level, adju
     byCase.set(key, out);
   }
   return out;
+}
+
+/**
+ * Findings name their sources by id: sets checked together must not give one id to two
+ * different sources. (A set reached through two chains lists the same entry twice: that holds.)
+ */
+export function checkSourceIdsAgree(sets: readonly ResolvedCriteriaSet[]): void {
+  const seen = new Map<string, { entry: SourceEntry; set: ResolvedCriteriaSet }>();
+  const issues: InputIssue[] = [];
+  for (const set of sets) {
+    for (const entry of set.sources) {
+      const earlier = seen.get(entry.id);
+      if (!earlier) seen.set(entry.id, { entry, set });
+      else if (JSON.stringify(earlier.entry) !== JSON.stringify(entry)) {
+        issues.push({
+          file: set.files[set.files.length - 1] ?? set.id,
+          field: 'sources',
+          message: `source id '${entry.id}' of set '${entry.set}' names another source than in set '${earlier.entry.set}' (criteria ${earlier.set.id}), checked in the same run: give one of them an id of its own`,
+          code: 'duplicate_id',
+        });
+      }
+    }
+  }
+  if (issues.length > 0) throw new InputError(issues);
 }

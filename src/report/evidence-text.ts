@@ -14,25 +14,30 @@ export const EVIDENCE_MEANING: Record<EvidenceClass, string> = {
 export interface EvidenceGroup {
   /** "Level 1", "Levels 1, 2", "params phiBetaK1, phiBetaK2" */
   covers: string;
+  /** the levels it covers (none for a group of parameters) */
+  levels: ('1' | '2' | '3')[];
   evidence: Evidence;
 }
 
 /**
- * A criterion's evidence grouped the way it was written: levels stated by one entry share it
- * (the resolver fills every level from its entry, and a level left out of `levels` takes
- * the entry of the level whose bounds it holds).
+ * A criterion's evidence grouped the way it was written: levels with the same evidence are
+ * shown once (a level left out of `levels` takes the evidence of the level whose bounds it
+ * holds).
  */
 export function evidenceGroups(c: ResolvedCriterion): EvidenceGroup[] {
-  const groups: { levels: string[]; evidence: Evidence }[] = [];
-  for (const key of ['1', '2', '3'] as const) {
-    const e = c.evidence[key];
-    const group = groups.find((g) => g.evidence === e);
-    if (group) group.levels.push(key);
-    else groups.push({ levels: [key], evidence: e });
+  // Compared by content, not identity: a copy of the set (e.g. made visible for a terminal)
+  // no longer shares the entry objects.
+  const groups: { levels: ('1' | '2' | '3')[]; evidence: Evidence; key: string }[] = [];
+  for (const level of ['1', '2', '3'] as const) {
+    const e = c.evidence[level];
+    const key = JSON.stringify(e);
+    const group = groups.find((g) => g.key === key);
+    if (group) group.levels.push(level);
+    else groups.push({ levels: [level], evidence: e, key });
   }
   return [
-    ...groups.map((g) => ({ covers: `${g.levels.length > 1 ? 'Levels' : 'Level'} ${g.levels.join(', ')}`, evidence: g.evidence })),
-    ...c.paramEvidence.map((p) => ({ covers: `params ${p.params.join(', ')}`, evidence: p })),
+    ...groups.map((g) => ({ covers: `${g.levels.length > 1 ? 'Levels' : 'Level'} ${g.levels.join(', ')}`, levels: g.levels, evidence: g.evidence })),
+    ...c.paramEvidence.map((p) => ({ covers: `params ${p.params.join(', ')}`, levels: [], evidence: p })),
   ];
 }
 

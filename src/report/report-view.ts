@@ -252,6 +252,8 @@ export interface ComparisonView {
 export interface EvidenceGroupView {
   /** "Level 1", "Levels 2, 3", "params ..." */
   covers: string;
+  /** the bounds of the levels it covers, in the quantity's unit ('' for parameters) */
+  bounds: string;
   evidence: EvidenceClass;
   /** the set that stated it, when not the criterion's own set */
   statedBy: string | null;

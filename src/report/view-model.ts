@@ -5,8 +5,9 @@
 import type { Comparison } from '../compare/compare-results.js';
 import { countVerdicts } from '../results.js';
 import { EVIDENCE_ORDER, weaker } from '../criteria/evidence.js';
+import { expandLevels } from '../criteria/level-bounds.js';
 import type {
-  ConditionResult, DynamicsForm, EvidenceClass, Finding, ResolvedCriteriaSet, ResultMode, Results, SourceEntry, VerdictCounts,
+  ConditionResult, DynamicsForm, EvidenceClass, Finding, ResolvedCriteriaSet, ResolvedCriterion, ResultMode, Results, SourceEntry, VerdictCounts,
 } from '../types.js';
 import { EVIDENCE_MEANING, evidenceGroups, levelClassesText } from './evidence-text.js';
 import { STANDING_CAUTIONS } from './cautions.js';
@@ -23,7 +24,7 @@ import type {
   ChartView, ConditionView, CriteriaSetView, EvidenceSummaryView, FindingRow, ModeRow, OverviewView, ReportView, SourceView, VerdictTally,
 } from './report-view.js';
 import { VERDICT_ORDER, verdictMark, worstVerdict } from './verdict-marks.js';
-import { dateText, eigenvalueText, levelBoundsText, lengthText, NONE, sig, signedSig, unitText, withUnit } from './view-format.js';
+import { boundText, dateText, eigenvalueText, levelBoundsText, lengthText, NONE, sig, signedSig, unitText, withUnit } from './view-format.js';
 import { isRealMode, modeStability, type Stability } from '../modes/stability.js';
 import { defaultsBehind } from './finding-defaults.js';
 import { isSingleRequirement, levelReachedWords, modeLevel, modeLevelWords } from './mode-levels.js';
@@ -220,6 +221,7 @@ function setView(set: ResolvedCriteriaSet): CriteriaSetView {
       evidence: weaker(weaker(c.evidence['1'].class, c.evidence['2'].class), c.evidence['3'].class),
       groups: evidenceGroups(c).map((g) => ({
         covers: g.covers,
+        bounds: groupBounds(c, g.levels),
         evidence: g.evidence.class,
         statedBy: g.evidence.by !== c.set ? g.evidence.by : null,
         cites: g.evidence.cites.map((x) => ({
@@ -235,6 +237,16 @@ function setView(set: ResolvedCriteriaSet): CriteriaSetView {
     })),
     dropped: set.dropped,
   };
+}
+
+/** The bounds of the levels of one evidence group: "≥ 0.35", or "≤ 1.4 / ≤ 3" for two levels. */
+function groupBounds(c: ResolvedCriterion, levels: readonly ('1' | '2' | '3')[]): string {
+  if (levels.length === 0) return '';
+  const expanded = expandLevels(c.levels);
+  const texts = levels.map((k) => boundText(expanded[k]));
+  const unit = unitText(QUANTITY_UNIT[c.quantity]);
+  const shown = texts.every((t) => t === texts[0]) ? texts[0]! : texts.join(' / ');
+  return unit !== '' && unit !== '-' ? `${shown} ${unit}` : shown;
 }
 
 /** HTML id of a source in the list at the end of the document. */

@@ -10,6 +10,7 @@
  * textbook reprint of the tables, laid out the older way (by Class for the spiral).
  */
 import { describe, expect, it } from 'vitest';
+import { checkSourceIdsAgree } from '../../src/criteria/evidence.js';
 import { resolveCriteriaChain } from '../../src/criteria/resolve.js';
 import { loadCriteriaSet } from '../../src/load/criteria-file.js';
 import type { Evidence, ResolvedCriteriaSet } from '../../src/types.js';
@@ -270,5 +271,31 @@ overrides:
   it('the Part 25 fixture sets the heavily-damped number without evidence: programme-set', () => {
     const set = shipped[3]![1];
     expect(criterion(set, 'part25-short-period-heavily-damped').evidence['1'].class).toBe('programme-set');
+  });
+});
+
+describe('sets checked together', () => {
+  const set = (id: string, title: string) =>
+    resolveCriteriaChain([
+      parsedFile(
+        `format: modalgate-criteria/1
+id: ${id}
+title: ${id}
+sources: [{ id: spec, kind: primary, title: ${title} }]
+criteria:
+  - { id: c, title: t, mode: roll, quantity: time_constant, applies: {}, levels: { "1": { max: 1 } }, source: { document: d, paragraph: p }, evidence: [{ class: published, cites: [{ source: spec, at: p. 1 }] }], note: "" }
+`,
+        `${id}.yaml`,
+      ),
+    ]);
+
+  it('may share a source list (the same set reached twice, or the same entry)', () => {
+    expect(() => checkSourceIdsAgree([mil, shipped[1]![1]])).not.toThrow();
+  });
+
+  it('may not give one id to two different sources: findings cite by id', () => {
+    expect(() => checkSourceIdsAgree([set('one', 'Spec A'), set('two', 'Spec B')])).toThrow(
+      "two.yaml: sources: source id 'spec' of set 'two' names another source than in set 'one' (criteria one), checked in the same run: give one of them an id of its own [duplicate_id]",
+    );
   });
 });
