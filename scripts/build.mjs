@@ -1,8 +1,9 @@
 #!/usr/bin/env node
 /**
- * Build dist/ with the TypeScript compiler (tsconfig.build.json), and record a digest of what
- * the build read (every file under src/, both tsconfig files, the compiler's version) in
- * dist/.sources-sha256.
+ * Build dist/ with the TypeScript compiler (tsconfig.build.json), write the parsed and checked
+ * form of each shipped criteria set to dist/criteria-cache/ (src/load/criteria-cache.ts), and
+ * record a digest of what the build read (every file under src/, the shipped criteria files,
+ * both tsconfig files, the compiler's version) in dist/.sources-sha256.
  *
  *   node scripts/build.mjs              build (npm run build)
  *   node scripts/build.mjs --if-stale   build only when dist/ is not that of the sources (npm's prepare)
@@ -15,7 +16,7 @@
  */
 import { spawnSync } from 'node:child_process';
 import { createHash } from 'node:crypto';
-import { existsSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdirSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { join, relative, sep } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
@@ -48,7 +49,8 @@ function compilerVersion(root) {
 export function sourcesDigest(root) {
   const hash = createHash('sha256');
   hash.update(`typescript ${compilerVersion(root)}\n`);
-  const files = [...INPUTS.map((f) => join(root, f)).filter((f) => existsSync(f)), ...filesUnder(join(root, 'src'))]
+  const criteria = existsSync(join(root, 'criteria')) ? filesUnder(join(root, 'criteria')).filter((f) => /\.ya?ml$/i.test(f)) : [];
+  const files = [...INPUTS.map((f) => join(root, f)).filter((f) => existsSync(f)), ...filesUnder(join(root, 'src')), ...criteria]
     .map((f) => relative(root, f).split(sep).join('/'))
     .sort();
   for (const file of files) {
@@ -68,18 +70,40 @@ export function staleness(root) {
   return null;
 }
 
-function build(root) {
+async function build(root) {
   // no record while building: a build that fails part-way must not look current
   rmSync(join(root, STAMP), { force: true });
   const require = createRequire(join(root, 'package.json'));
   const tsc = require.resolve('typescript/bin/tsc');
   const child = spawnSync(process.execPath, [tsc, '-p', join(root, 'tsconfig.build.json')], { stdio: 'inherit' });
   if (child.status !== 0) return child.status ?? 1;
+  await writeCriteriaCache(root);
   writeFileSync(join(root, STAMP), `${sourcesDigest(root)}\n`);
   return 0;
 }
 
-function main(argv) {
+/** dist/criteria-cache/<id>.json for each shipped criteria/<id>.yaml that passes the schema. */
+async function writeCriteriaCache(root) {
+  const { criteriaCacheEntry } = await import(pathToFileURL(join(root, 'dist', 'load', 'criteria-cache.js')).href);
+  const out = join(root, 'dist', 'criteria-cache');
+  rmSync(out, { recursive: true, force: true });
+  mkdirSync(out, { recursive: true });
+  const dir = join(root, 'criteria');
+  if (!existsSync(dir)) return;
+  for (const name of readdirSync(dir).filter((f) => /\.ya?ml$/i.test(f)).sort()) {
+    const bytes = readFileSync(join(dir, name));
+    const text = bytes.toString('utf8').replace(/^\uFEFF/, '');
+    let entry = null;
+    try {
+      entry = criteriaCacheEntry(text, `criteria/${name}`, createHash('sha256').update(bytes).digest('hex'));
+    } catch {
+      // a file that does not parse is not cached: loading it reports its problems
+    }
+    if (entry) writeFileSync(join(out, name.replace(/\.ya?ml$/i, '.json')), JSON.stringify(entry));
+  }
+}
+
+async function main(argv) {
   let mode = 'build';
   let root = fileURLToPath(new URL('..', import.meta.url));
   for (let i = 0; i < argv.length; i++) {
@@ -106,5 +130,5 @@ function main(argv) {
 }
 
 if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) {
-  process.exitCode = main(process.argv.slice(2));
+  process.exitCode = await main(process.argv.slice(2));
 }

@@ -3,13 +3,14 @@
  * Follows the `extends` chain, validates every file (all problems at once, with file, line
  * and column), then hands the chain, root first, to the pure resolver.
  */
-import { existsSync, readdirSync } from 'node:fs';
+import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { InputError, type InputIssue } from '../errors.js';
 import type { ParsedCriteriaFile } from '../criteria/parsed-criteria-file.js';
 import { resolveCriteriaChain } from '../criteria/resolve.js';
 import type { Place, ResolvedCriteriaSet } from '../types.js';
+import { parsedFromCache } from './criteria-cache.js';
 import { criteriaFileSchema } from './criteria-schema.js';
 import { readRegularFile, sha256Hex, UnreadableFile, withoutByteOrderMark } from './read-file.js';
 import { parseStructuredText } from './structured-text.js';
@@ -40,13 +41,24 @@ export async function loadCriteriaSet(ref: string): Promise<LoadedCriteriaSet> {
     }
     seen.set(absolute, shown);
     const bytes = await readBytes(absolute, shown, extendsAt);
+    const sha256 = sha256Hex(bytes);
+    const cached = shippedFromCache(absolute, shown, sha256);
+    if (cached) {
+      chain.unshift({ parsed: cached, sha256 });
+      const parent = cached.data.extends;
+      if (typeof parent !== 'string') break;
+      extendsAt = { file: shown, ...(cached.locate(['extends']) ?? {}) };
+      next = locateRef(parent, next);
+      if (!next) issues.push(unknownExtends(parent, extendsAt));
+      continue;
+    }
     const text = withoutByteOrderMark(bytes.toString('utf8'));
     const source = parseStructuredText(text, shown);
     const checked = criteriaFileSchema.safeParse(source.value);
     // A file with schema problems is still followed up its chain, so that one run reports all.
     let parent: unknown;
     if (checked.success) {
-      chain.unshift({ parsed: { file: shown, data: checked.data, locate: source.locate }, sha256: sha256Hex(bytes) });
+      chain.unshift({ parsed: { file: shown, data: checked.data, locate: source.locate }, sha256 });
       parent = checked.data.extends;
     } else {
       issues.push(...issuesFromZod(checked.error, source).map(formerFieldHint));
@@ -55,16 +67,7 @@ export async function loadCriteriaSet(ref: string): Promise<LoadedCriteriaSet> {
     if (typeof parent !== 'string') break;
     extendsAt = { file: shown, ...(source.locate(['extends']) ?? {}) };
     next = locateRef(parent, next);
-    if (!next) {
-      issues.push({
-        ...extendsAt,
-        field: 'extends',
-        message: `no criteria file or shipped set '${parent}'`,
-        expected: `a path relative to this file, or one of ${shippedIds().join(', ')}`,
-        found: JSON.stringify(parent),
-        code: 'unknown_extends',
-      });
-    }
+    if (!next) issues.push(unknownExtends(parent, extendsAt));
   }
   if (issues.length > 0) throw new InputError(issues);
 
@@ -80,6 +83,36 @@ function formerFieldHint(issue: InputIssue): InputIssue {
     message: "unknown field 'confidence': it was replaced by `evidence`",
     expected: 'evidence: a list of entries with levels, class (published | secondary | conflicting | memory | programme-set), cites and note; see DEVELOPERS.md',
   };
+}
+
+function unknownExtends(parent: string, extendsAt: Place): InputIssue {
+  return {
+    ...extendsAt,
+    field: 'extends',
+    message: `no criteria file or shipped set '${parent}'`,
+    expected: `a path relative to this file, or one of ${shippedIds().join(', ')}`,
+    found: JSON.stringify(parent),
+    code: 'unknown_extends',
+  };
+}
+
+/**
+ * dist/criteria-cache/ beside the compiled loader (see criteria-cache.ts); from the sources
+ * (tests) there is none, and every file is parsed.
+ */
+const CRITERIA_CACHE_DIR = fileURLToPath(new URL('../criteria-cache/', import.meta.url));
+
+/** A shipped criteria file's cached parsed form, when one was built from these bytes. */
+function shippedFromCache(absolute: string, shown: string, sha256: string): ParsedCriteriaFile | null {
+  if (path.dirname(absolute) !== path.resolve(SHIPPED_CRITERIA_DIR)) return null;
+  const name = path.basename(absolute).replace(/\.ya?ml$/i, '.json');
+  let entry: unknown;
+  try {
+    entry = JSON.parse(readFileSync(path.join(CRITERIA_CACHE_DIR, name), 'utf8'));
+  } catch {
+    return null;
+  }
+  return parsedFromCache(entry, shown, sha256);
 }
 
 interface Located {
