@@ -14,10 +14,6 @@ import { INDENT_UP_TO_CONDITIONS } from './report/json.js';
 import { ResultsJsonFile } from './report/results-json-file.js';
 import { JunitFile } from './report/junit-file.js';
 import type { ConditionResult, ResultsHead } from './types.js';
-import { compareResults } from './compare/compare-results.js';
-import { formatComparisonText } from './compare/format-comparison.js';
-import { parseBaselineResults } from './compare/compare-results.js';
-import { formatCriteriaSetText } from './report/criteria-text.js';
 import { InputError } from './errors.js';
 import { loadCriteriaSet } from './load/criteria-file.js';
 import { BASELINE_LIMIT_BYTES, readInputFile } from './load/read-file.js';
@@ -110,7 +106,7 @@ export async function main(argv: string[], io: Io = defaultIo()): Promise<number
     .argument('<file>', 'criteria file or shipped set id')
     .description('print the resolved criteria set (after extends and overrides) as a table')
     .action(async (file: string) => {
-      const { set } = await loadCriteriaSet(file);
+      const [{ set }, { formatCriteriaSetText }] = await Promise.all([loadCriteriaSet(file), import('./report/criteria-text.js')]);
       io.out(formatCriteriaSetText(set));
     });
   criteria
@@ -221,7 +217,9 @@ interface ReportContext {
 async function reportCheck(outcome: CheckOutcome, context: ReportContext, io: Io): Promise<number> {
   const { modelPath, opts, baseline, detail, streams } = context;
   if (baseline) outcome.results.inputs.push({ role: 'baseline', path: baseline.path, sha256: baseline.sha256 });
-  const comparison = baseline ? compareResults(outcome.results, parseBaselineResults(baseline.text, baseline.path)) : undefined;
+  // the comparison's machinery (and the baseline schema) loads only with a baseline
+  const compare = baseline ? await Promise.all([import('./compare/compare-results.js'), import('./compare/format-comparison.js')]) : undefined;
+  const comparison = baseline && compare ? compare[0].compareResults(outcome.results, compare[0].parseBaselineResults(baseline.text, baseline.path)) : undefined;
 
   const total = outcome.conditionCount;
   if (!opts.detail && total > LARGE_RUN) io.out(`${total} conditions: per-condition detail limited to conditions with issues (--detail all to list every one)`);
@@ -229,7 +227,7 @@ async function reportCheck(outcome: CheckOutcome, context: ReportContext, io: Io
 
   const html = outputPaths(modelPath, opts).find((o) => o.option === '--html')?.path;
   io.out(formatResultsText(outcome.results, { color: io.color, detail, findings: true, conditionCount: total }));
-  if (comparison) io.out(`\n${formatComparisonText(comparison, { color: io.color })}`);
+  if (comparison && compare) io.out(`\n${compare[1].formatComparisonText(comparison, { color: io.color })}`);
 
   const request: OutputRequest = {
     ...(html ? { html } : {}),
