@@ -126,8 +126,11 @@ export async function main(argv: string[], io: Io = defaultIo()): Promise<number
   }
 }
 
-/** Above this many conditions the terminal and the report list only conditions with issues, unless asked. */
+/** Above this many conditions the report lists only conditions with issues, unless asked. */
 const LARGE_RUN = 50;
+
+/** Above this many conditions the terminal lists only conditions with issues, unless asked (a screenful of tables). */
+const SMALL_SWEEP = 8;
 
 interface CheckCommandOptions {
   criteria: string[];
@@ -159,6 +162,7 @@ async function checkCommand(modelPath: string, opts: CheckCommandOptions, argv: 
   // conditions the terminal lists are kept whole. The report and a comparison need every
   // result, so with either of them the results are kept and every output written at the end.
   const detailFor = (total: number) => opts.detail ?? (total > LARGE_RUN ? 'issues' : 'all');
+  const terminalDetailFor = (total: number) => opts.detail ?? (total > SMALL_SWEEP ? 'issues' : 'all');
   const streamable = opts.html === undefined && opts.pdf === undefined && !baseline;
   const streamsTo = (path: string | undefined): path is string => streamable && path !== undefined && targetKind(realTarget(path)) !== 'device';
   const streams: Streams = {};
@@ -186,11 +190,12 @@ async function checkCommand(modelPath: string, opts: CheckCommandOptions, argv: 
             keep: (r: ConditionResult, total: number) =>
               (opts.json !== undefined && streams.json === undefined) ||
               (opts.junit !== undefined && streams.junit === undefined) ||
-              keepFor(detailFor(total), r),
+              keepFor(terminalDetailFor(total), r),
           }
         : {}),
     }).finally(progress.stop);
-    return await reportCheck(outcome, { modelPath, opts, baseline, detail: detailFor(outcome.conditionCount), streams }, io);
+    const total = outcome.conditionCount;
+    return await reportCheck(outcome, { modelPath, opts, baseline, detail: detailFor(total), terminalDetail: terminalDetailFor(total), streams }, io);
   } catch (err) {
     // files begun during the check are dropped; the last good ones stay in place
     streams.json?.abort();
@@ -210,23 +215,28 @@ interface ReportContext {
   opts: CheckCommandOptions;
   baseline: Awaited<ReturnType<typeof readInputFile>> | undefined;
   detail: 'all' | 'issues' | 'none';
+  /** the terminal's own: a sweep beyond a few conditions lists those with issues */
+  terminalDetail: 'all' | 'issues' | 'none';
   /** the outputs written as the conditions were checked */
   streams: Streams;
 }
 
 async function reportCheck(outcome: CheckOutcome, context: ReportContext, io: Io): Promise<number> {
-  const { modelPath, opts, baseline, detail, streams } = context;
+  const { modelPath, opts, baseline, detail, terminalDetail, streams } = context;
   if (baseline) outcome.results.inputs.push({ role: 'baseline', path: baseline.path, sha256: baseline.sha256 });
   // the comparison's machinery (and the baseline schema) loads only with a baseline
   const compare = baseline ? await Promise.all([import('./compare/compare-results.js'), import('./compare/format-comparison.js')]) : undefined;
   const comparison = baseline && compare ? compare[0].compareResults(outcome.results, compare[0].parseBaselineResults(baseline.text, baseline.path)) : undefined;
 
   const total = outcome.conditionCount;
-  if (!opts.detail && total > LARGE_RUN) io.out(`${total} conditions: per-condition detail limited to conditions with issues (--detail all to list every one)`);
+  if (!opts.detail && total > SMALL_SWEEP) {
+    const where = total > LARGE_RUN ? 'here and in the report' : 'here (the report has every one)';
+    io.out(`${total} conditions: per-condition detail limited to conditions with issues ${where}; --detail all lists every one`);
+  }
   if (opts.json) tellModeShapes(outcome, io);
 
   const html = outputPaths(modelPath, opts).find((o) => o.option === '--html')?.path;
-  io.out(formatResultsText(outcome.results, { color: io.color, detail, findings: true, conditionCount: total }));
+  io.out(formatResultsText(outcome.results, { color: io.color, detail: terminalDetail, findings: true, conditionCount: total }));
   if (comparison && compare) io.out(`\n${compare[1].formatComparisonText(comparison, { color: io.color })}`);
 
   const request: OutputRequest = {

@@ -64,7 +64,7 @@ export interface FindingRow {
   /** evidence class of the boundary judged against, and the ids of its sources */
   evidence: EvidenceClass;
   evidenceSources: { id: string; anchor: string }[];
-  /** why this verdict (always filled for not evaluated) */
+  /** why this verdict: filled for every verdict but a pass (whose level column says it) */
   reason: string;
   method: string | null;
 }

@@ -90,12 +90,13 @@ function modeRow(mode: ResultMode, c: ConditionResult): ModeRow {
   };
 }
 
-function findingRow(f: Finding, c: ConditionResult): FindingRow {
+function findingRow(f: Finding, c: ConditionResult, showSet: boolean): FindingRow {
   const unit = f.unit.trim() !== '' ? f.unit : QUANTITY_UNIT[f.quantity];
   const bounds = levelBoundsText(f.bounds);
   return {
     criterion: f.criterion,
-    set: f.set,
+    // one set in use: its id is in the title block, not on every row
+    set: showSet ? f.set : '',
     title: f.title,
     mode: MODE_LABEL[f.mode],
     quantity: QUANTITY_LABEL[f.quantity],
@@ -110,7 +111,8 @@ function findingRow(f: Finding, c: ConditionResult): FindingRow {
     source: f.source,
     evidence: f.evidence.class,
     evidenceSources: f.evidence.sources.map((id) => ({ id, anchor: sourceAnchor(id) })),
-    reason: f.reason,
+    // a pass says no more than its level column; any other verdict says why
+    reason: f.verdict === 'pass' ? '' : f.reason,
     method: f.method ?? null,
   };
 }
@@ -152,7 +154,7 @@ function subsystemsText(c: ConditionResult): string {
   return parts.join('; ');
 }
 
-function conditionView(c: ConditionResult, anchor: string, withCharts: boolean, chartsOmitted: string): ConditionView {
+function conditionView(c: ConditionResult, anchor: string, withCharts: boolean, chartsOmitted: string, showSet: boolean): ConditionView {
   return {
     id: c.id,
     anchor,
@@ -168,7 +170,7 @@ function conditionView(c: ConditionResult, anchor: string, withCharts: boolean, 
     mark: verdictMark(conditionVerdict(c)),
     tally: tallyOf(countVerdicts(c.findings)),
     modes: c.modes.map((m) => modeRow(m, c)),
-    findings: c.findings.map((f) => findingRow(f, c)),
+    findings: c.findings.map((f) => findingRow(f, c, showSet)),
     notApplicable: c.notApplicable.map((n) => ({ criterion: n.criterion, title: n.title, source: n.source, reason: n.reason })),
     warnings: [...c.warnings, ...derivedWarnings(c)],
     notes: c.notes,
@@ -378,7 +380,7 @@ export function buildReportView(results: Results, sets: ResolvedCriteriaSet[], o
     envelope: results.conditions.length > 1 ? envelopeView(results.conditions, sets, anchorOf) : null,
     comparison: options.comparison ? comparisonView(options.comparison, (id) => anchorById.get(id) ?? null) : null,
     overview: overviewView(results, anchorOf),
-    conditions: selection.detailed.map((i, k) => conditionView(results.conditions[i]!, anchors[i]!, k < SECTION_CHART_CAP, chartsOmitted)),
+    conditions: selection.detailed.map((i, k) => conditionView(results.conditions[i]!, anchors[i]!, k < SECTION_CHART_CAP, chartsOmitted, sets.length > 1)),
     cautions: [...STANDING_CAUTIONS],
     traceability: {
       inputs: results.inputs.map((i) => ({ role: i.role, path: i.path, sha256: i.sha256 })),

@@ -3,6 +3,7 @@ import { shortPeriodData, dutchRollData } from '../../src/report/charts/chart-da
 import { dutchRollChart, dutchRollFloor } from '../../src/report/charts/dutch-roll-chart.js';
 import { DAMPING_RAYS, sPlaneChart } from '../../src/report/charts/s-plane-chart.js';
 import { lowerEdge, shortPeriodChart, upperEdge } from '../../src/report/charts/short-period-chart.js';
+import { MODE_LABEL } from '../../src/report/labels.js';
 import type { ConditionResult } from '../../src/types.js';
 import { larkspurReview } from '../fixtures/results/larkspur-review.js';
 
@@ -19,8 +20,8 @@ describe('s-plane map', () => {
     for (const c of conditions()) {
       const { svg } = sPlaneChart(c);
       const eigen = c.modes.flatMap((m) => m.eigenvalues).length;
-      expect(count(svg!, /class="pole"/g)).toBe(eigen);
-      expect(count(svg!, /class="pole-zoom"/g)).toBeGreaterThan(0);
+      expect(count(svg!, /class="pole mark"/g)).toBe(eigen);
+      expect(count(svg!, /class="pole-zoom mark"/g)).toBeGreaterThan(0);
     }
   });
 
@@ -37,9 +38,16 @@ describe('s-plane map', () => {
     });
   });
 
-  it('labels every mode by name', () => {
-    const { svg } = sPlaneChart(conditions()[2]!);
-    for (const label of ['short period', 'Dutch roll', 'other', 'phugoid', 'roll\u2013spiral (coupled)']) expect(svg).toContain(label);
+  it('numbers every mode beside its pole, with the key in the caption', () => {
+    const c = conditions()[2]!;
+    const { svg, caption } = sPlaneChart(c);
+    const modes = c.modes.filter((m) => m.eigenvalues.length > 0);
+    for (const label of ['short period', 'Dutch roll', 'other', 'phugoid', 'roll\u2013spiral (coupled)']) {
+      const n = modes.findIndex((m) => MODE_LABEL[m.kind] === label) + 1;
+      expect(n, label).toBeGreaterThan(0);
+      expect(caption).toContain(`${n} ${label}`);
+      expect(svg).toContain(`class="mode-label">${n}</text>`);
+    }
   });
 
   it('says so when there are no poles', () => {
@@ -72,7 +80,7 @@ describe('short-period chart', () => {
     // the fixture's n/alpha is 32.0 g/rad
     expect(data.nAlpha).toBeCloseTo(32, 8);
     const { svg, caption } = shortPeriodChart(tf);
-    expect(count(svg!, /class="aircraft-point"/g)).toBe(1);
+    expect(count(svg!, /class="aircraft-point mark"/g)).toBe(1);
     expect(svg).toContain('Level 1');
     expect(svg).toContain('Level 2');
     expect(caption).toContain('Category A');
@@ -80,7 +88,9 @@ describe('short-period chart', () => {
 
   it('draws the split short period of the approach too', () => {
     const pa = conditions()[1]!;
-    expect(shortPeriodChart(pa).svg).toContain('PA-450: n/\u03b1 5.40');
+    const out = shortPeriodChart(pa);
+    expect(out.caption).toContain('PA-450: n/\u03b1 5.40');
+    expect(out.svg).toContain('class="point-label">PA-450</text>');
   });
 
   it('says so when CAP findings or the mode are missing', () => {
@@ -112,7 +122,7 @@ describe('Dutch roll chart', () => {
     const pa = conditions()[1]!;
     const { svg } = dutchRollChart(pa);
     expect(count(svg!, /class="region region-l\d"/g)).toBe(3);
-    expect(count(svg!, /class="aircraft-point"/g)).toBe(1);
+    expect(count(svg!, /class="aircraft-point mark"/g)).toBe(1);
     const missing = dutchRollChart({ ...pa, modes: pa.modes.filter((m) => m.kind !== 'dutch_roll') });
     expect(missing.svg).toBeNull();
     expect(missing.caption).toMatch(/No identified Dutch roll/);

@@ -6,7 +6,8 @@ import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { pathToFileURL } from 'node:url';
-import puppeteer, { type Browser, type Page } from 'puppeteer-core';
+import type { Browser, Page } from 'puppeteer-core';
+import { launchTestBrowser } from './test-browser.js';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { runCheck } from '../../src/check.js';
 import { renderHtml } from '../../src/report/html.js';
@@ -17,12 +18,7 @@ const work = mkdtempSync(join(tmpdir(), 'mg-dom-test-'));
 let browser: Browser;
 
 beforeAll(async () => {
-  browser = await puppeteer.launch({
-    executablePath: '/usr/bin/chromium',
-    headless: true,
-    userDataDir: join(work, 'profile'),
-    args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run'],
-  });
+  browser = await launchTestBrowser(work);
 });
 
 afterAll(async () => {

@@ -11,11 +11,11 @@ import { sig } from '../view-format.js';
 import { dutchRollData, type DutchRollLevel } from './chart-data.js';
 import {
   type Box, type ChartOutput, bottomAxis, clipPath, frameRect, gridLines, haloText, leftAxis,
-  legendSwatch, levelFill, levelPatterns, levelStroke, overlaps, placeLabel, px, type Rect, safeId, svgOpen, textWidth,
+  crossesAny, levelFill, levelLegend, levelPatterns, levelStroke, overlaps, placeLabel, type Polyline, px, type Rect, safeId, svgOpen, textWidth,
 } from './svg-kit.js';
 
 const WIDTH = 330;
-const HEIGHT = 250;
+const HEIGHT = 262;
 const BOX: Box = { left: 44, top: 10, width: 270, height: 190 };
 const SAMPLES = 240;
 
@@ -52,6 +52,7 @@ export function dutchRollChart(condition: ConditionResult): ChartOutput {
   parts.push(`<defs>${levelPatterns(id)}${clipPath(`${id}-clip`, BOX)}</defs>`);
   parts.push(`<rect x="${BOX.left}" y="${BOX.top}" width="${BOX.width}" height="${BOX.height}" fill="#fff"/>`);
   const drawOrder = [...data.levels].sort((a, b) => b.level - a.level);
+  const lines: Polyline[] = [];
   parts.push(`<g clip-path="url(#${id}-clip)">`);
   for (const l of drawOrder) {
     const region = area<number>()
@@ -69,10 +70,13 @@ export function dutchRollChart(condition: ConditionResult): ChartOutput {
       .x((w) => x(w))
       .y((w) => y(clampY(dutchRollFloor(l, w))));
     const from = l.omegaMin ?? start;
-    parts.push(`<path class="boundary" d="${edge([from, ...samples.filter((w) => w > from)]) ?? ''}" fill="none" ${style}/>`);
+    const along = [from, ...samples.filter((w) => w > from)];
+    parts.push(`<path class="boundary" d="${edge(along) ?? ''}" fill="none" ${style}/>`);
+    lines.push(along.filter((w) => Number.isFinite(dutchRollFloor(l, w))).map((w) => [x(w), y(clampY(dutchRollFloor(l, w)))] as const));
     if (l.omegaMin !== undefined) {
       const y0 = y(clampY(dutchRollFloor(l, l.omegaMin)));
       parts.push(`<line class="boundary" x1="${px(x(l.omegaMin))}" x2="${px(x(l.omegaMin))}" y1="${px(y0)}" y2="${px(y(ceiling(l)))}" ${style}/>`);
+      lines.push([[x(l.omegaMin), y0], [x(l.omegaMin), y(ceiling(l))]]);
     }
   }
   parts.push('</g>');
@@ -83,8 +87,9 @@ export function dutchRollChart(condition: ConditionResult): ChartOutput {
   const cx = x(omega);
   const cy = y(clampY(zeta));
   const taken: Rect[] = [{ x: cx - 5, y: cy - 5, w: 10, h: 10 }];
-  const pointText = `${condition.id}: \u03c9nd ${sig(omega)}, \u03b6d ${sig(zeta)}`;
-  const pointAt = placeLabel(cx, cy, pointText, BOX, taken, 8.5);
+  // the point is named by its condition; its figures are in the caption
+  const pointText = condition.id;
+  const pointAt = placeLabel(cx, cy, pointText, BOX, taken, 8.5, lines);
 
   // Each level is named inside its own part of the plane (less the better level's part),
   // at the first abscissa from the right where the label fits clear of the point.
@@ -100,25 +105,21 @@ export function dutchRollChart(condition: ConditionResult): ChartOutput {
       const top = y(clampY(hi));
       const bottom = y(clampY(lo));
       const r: Rect = { x: x(at) - w / 2, y: (top + bottom) / 2 - 6, w, h: 11 };
-      if (bottom - top < 13 || taken.some((t) => overlaps(t, r))) continue;
+      if (bottom - top < 13 || taken.some((t) => overlaps(t, r)) || crossesAny(r, lines)) continue;
       taken.push(r);
       parts.push(haloText(x(at), (top + bottom) / 2 + 3, text, 'region-label', 'middle'));
       break;
     }
   }
-  const worst = Math.max(...data.levels.map((l) => l.level));
-  parts.push(`<g class="aircraft-point"><circle cx="${px(cx)}" cy="${px(cy)}" r="4" fill="#000" stroke="#fff" stroke-width="1.2"/></g>`);
+  const worstLevel = [...data.levels].sort((a, b) => b.level - a.level)[0]!;
+  const open = (l: DutchRollLevel) => l.zetaMin === undefined && l.zetaMax === undefined && l.zetaOmegaMin === undefined && l.omegaMin === undefined;
+  parts.push(`<g class="aircraft-point mark"><circle cx="${px(cx)}" cy="${px(cy)}" r="4" fill="#000" stroke="#fff" stroke-width="1.2"/></g>`);
   parts.push(haloText(pointAt.x, pointAt.y, pointText, 'point-label', pointAt.anchor));
 
-  let lx = BOX.left;
-  for (const l of [...data.levels].sort((a, b) => a.level - b.level)) {
-    parts.push(legendSwatch(lx, HEIGHT - 6, levelFill(id, l.level), levelStroke(l.level), `Level ${l.level}`));
-    lx += 58;
-  }
-  parts.push(legendSwatch(lx, HEIGHT - 6, '#fff', 'stroke="#111" stroke-width="0.6"', `outside Level ${worst}`));
+  parts.push(levelLegend(id, data.levels.map((l) => ({ level: l.level, open: open(l) })), open(worstLevel) ? null : worstLevel.level, HEIGHT - 20, WIDTH));
   parts.push('</svg>');
   return {
     svg: parts.join(''),
-    caption: `Dutch roll damping ratio against frequency; each level requires \u03b6d, \u03b6d\u00b7\u03c9nd (a hyperbola here) and \u03c9nd at or above its limits. Point \u03b6d\u00b7\u03c9nd ${sig(zeta * omega)} rad/s.`,
+    caption: `Dutch roll damping ratio against frequency; each level requires \u03b6d, \u03b6d\u00b7\u03c9nd (a hyperbola here) and \u03c9nd at or above its limits. Point ${condition.id}: \u03c9nd ${sig(omega)} rad/s, \u03b6d ${sig(zeta)}, \u03b6d\u00b7\u03c9nd ${sig(zeta * omega)} rad/s.`,
   };
 }

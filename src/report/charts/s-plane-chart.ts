@@ -39,7 +39,7 @@ function equalAspect(box: Box, xr: [number, number], yHalf: number): Domain {
   return { x: [xr[0] - xPad * 0.8, xr[1] + xPad * 0.2], y: [-yNew, yNew] };
 }
 
-function panel(box: Box, domain: Domain, modes: ResultMode[], unlabelled: readonly ResultMode[], id: string, hatchId: string, markerClass: string, title: string): string {
+function panel(box: Box, domain: Domain, modes: ResultMode[], unlabelled: readonly ResultMode[], numberOf: (m: ResultMode) => number, id: string, hatchId: string, markerClass: string, title: string): string {
   const x = scaleLinear().domain(domain.x).range([box.left, box.left + box.width]);
   const y = scaleLinear().domain(domain.y).range([box.top + box.height, box.top]);
   const out: string[] = [`<g class="s-plane-panel">`];
@@ -66,6 +66,18 @@ function panel(box: Box, domain: Domain, modes: ResultMode[], unlabelled: readon
       out.push(`<line class="damping-ray" x1="${px(x0)}" y1="${px(y(0))}" x2="${px(x(-zeta * reach))}" y2="${px(y(sign * wd * reach))}" stroke="#777" stroke-width="0.6" stroke-dasharray="3 2"/>`);
     }
   }
+  // Poles first, so that nothing is written over one.
+  const markers: string[] = [];
+  for (const mode of modes) {
+    for (const e of mode.eigenvalues) {
+      const cx = x(e.re);
+      const cy = y(e.im);
+      taken.push({ x: cx - 4.5, y: cy - 4.5, w: 9, h: 9 });
+      markers.push(
+        `<g class="${markerClass} mark" data-mode="${esc(mode.kind)}"><path d="M${px(cx - 3.5)},${px(cy - 3.5)}L${px(cx + 3.5)},${px(cy + 3.5)}M${px(cx - 3.5)},${px(cy + 3.5)}L${px(cx + 3.5)},${px(cy - 3.5)}" stroke="#000" stroke-width="1.6" fill="none"/></g>`,
+      );
+    }
+  }
   // Ray labels along the lower edge, where the rays fan out most; crowded ones are left out.
   for (const zeta of [...DAMPING_RAYS].reverse()) {
     const wd = Math.sqrt(1 - zeta * zeta);
@@ -78,26 +90,17 @@ function panel(box: Box, domain: Domain, modes: ResultMode[], unlabelled: readon
     taken.push(r);
     out.push(haloText(lx, ly, text, 'ray-label', 'middle'));
   }
-  const markers: string[] = [];
+  // Each mode is named by its number in the key (the caption), beside its upper pole (a real
+  // root: each root): a digit sits right by its pole where a name would crowd the next one.
   const labels: string[] = [];
   for (const mode of modes) {
-    for (const e of mode.eigenvalues) {
-      const cx = x(e.re);
-      const cy = y(e.im);
-      taken.push({ x: cx - 4, y: cy - 4, w: 8, h: 8 });
-      markers.push(
-        `<g class="${markerClass}" data-mode="${esc(mode.kind)}"><path d="M${px(cx - 3.5)},${px(cy - 3.5)}L${px(cx + 3.5)},${px(cy + 3.5)}M${px(cx - 3.5)},${px(cy + 3.5)}L${px(cx + 3.5)},${px(cy - 3.5)}" stroke="#000" stroke-width="1.6" fill="none"/></g>`,
-      );
-    }
-  }
-  for (const mode of modes) {
     if (unlabelled.includes(mode)) continue;
-    // A pair is named once, at its upper pole; real roots (a split short period) each get the name.
     const upper = mode.eigenvalues.find((e) => e.im > 0);
     const anchors = upper ? [upper] : mode.eigenvalues;
+    const text = String(numberOf(mode));
     for (const anchor of anchors) {
-      const at = placeLabel(x(anchor.re), y(anchor.im), MODE_LABEL[mode.kind], box, taken, 8);
-      labels.push(haloText(at.x, at.y, MODE_LABEL[mode.kind], 'mode-label', at.anchor));
+      const at = placeLabel(x(anchor.re), y(anchor.im), text, box, taken, 8.5);
+      labels.push(haloText(at.x, at.y, text, 'mode-label', at.anchor));
     }
   }
   out.push(...markers, ...labels);
@@ -126,15 +129,17 @@ export function sPlaneChart(condition: ConditionResult): ChartOutput {
   const width = slowPoles.length > 0 ? WIDTH_WITH_ZOOM : WIDTH_ALONE;
   const parts: string[] = [svgOpen(width, HEIGHT, `Poles of condition ${condition.id} in the s-plane`, 'chart-s-plane')];
   parts.push(`<defs><pattern id="${id}-unstable" patternUnits="userSpaceOnUse" width="8" height="8" patternTransform="rotate(-45)"><rect width="8" height="8" fill="#fff"/><line x1="0" y1="0" x2="0" y2="8" stroke="#c4c4c4" stroke-width="0.8"/></pattern></defs>`);
-  parts.push(panel(MAIN, main, modes, slowModes, `${id}-main`, `${id}-unstable`, 'pole', slowPoles.length > 0 ? 'all poles (slow modes labelled at right)' : 'all poles'));
-  let caption = `Poles (\u00d7) with rays of constant damping ratio ${DAMPING_RAYS.join(', ')}; equal scales on both axes; right half-plane hatched (unstable).`;
+  const numberOf = (m: ResultMode) => modes.indexOf(m) + 1;
+  parts.push(panel(MAIN, main, modes, slowModes, numberOf, `${id}-main`, `${id}-unstable`, 'pole', slowPoles.length > 0 ? 'all poles (slow modes numbered at right)' : 'all poles'));
+  const key = modes.map((m) => `${numberOf(m)} ${MODE_LABEL[m.kind]}`).join(', ');
+  let caption = `Poles (\u00d7) numbered by mode: ${key}. Rays of constant damping ratio ${DAMPING_RAYS.join(', ')}; equal scales on both axes; right half-plane hatched (unstable).`;
   if (slowPoles.length > 0) {
     // Zero roots (heading, position) and vanishing ones would give the panel no extent at all.
     const r = Math.max(Math.max(...slowPoles.map((p) => Math.hypot(p.re, p.im))) * 1.25, radius * 0.01);
     const sMin = Math.min(0, ...slowPoles.map((p) => p.re));
     const sMax = Math.max(0, ...slowPoles.map((p) => p.re));
     const zoom = equalAspect(ZOOM, [Math.min(sMin * 1.2, -r * 0.5), Math.max(sMax * 1.3, r * 0.25)], r);
-    parts.push(panel(ZOOM, zoom, slowModes, [], `${id}-zoom`, `${id}-unstable`, 'pole-zoom', 'near the origin'));
+    parts.push(panel(ZOOM, zoom, slowModes, [], numberOf, `${id}-zoom`, `${id}-unstable`, 'pole-zoom', 'near the origin'));
     caption += ` Right panel: ${slowModes.map((m) => MODE_LABEL[m.kind]).join(', ')} enlarged.`;
   }
   parts.push('</svg>');

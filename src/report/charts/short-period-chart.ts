@@ -10,11 +10,11 @@ import { sig } from '../view-format.js';
 import { shortPeriodData, type ShortPeriodLevel } from './chart-data.js';
 import {
   type Box, type ChartOutput, bottomAxis, clipPath, gridLines, frameRect, haloText, isOneTwoFive, leftAxis,
-  legendSwatch, levelFill, levelPatterns, levelStroke, overlaps, placeLabel, px, type Rect, safeId, svgOpen, textWidth,
+  crossesAny, levelFill, levelLegend, levelPatterns, levelStroke, overlaps, placeLabel, type Polyline, px, type Rect, safeId, svgOpen, textWidth,
 } from './svg-kit.js';
 
 const WIDTH = 330;
-const HEIGHT = 250;
+const HEIGHT = 262;
 const BOX: Box = { left: 44, top: 10, width: 270, height: 190 };
 const SAMPLES = 160;
 
@@ -68,6 +68,7 @@ export function shortPeriodChart(condition: ConditionResult): ChartOutput {
 
   // Worst level first so that better levels paint over it; each region is then read by its fill.
   const drawOrder = [...data.levels].sort((a, b) => b.level - a.level);
+  const lines: Polyline[] = [];
   parts.push(`<g clip-path="url(#${id}-clip)">`);
   for (const l of drawOrder) {
     const band = area<number>()
@@ -84,9 +85,11 @@ export function shortPeriodChart(condition: ConditionResult): ChartOutput {
       if (cap === undefined) continue;
       const boundary = line<number>().x((n) => x(n)).y((n) => y(Math.sqrt(cap * n)));
       parts.push(`<path class="boundary" d="${boundary([xlo, xhi]) ?? ''}" fill="none" ${style}/>`);
+      lines.push([[x(xlo), y(Math.sqrt(cap * xlo))], [x(xhi), y(Math.sqrt(cap * xhi))]]);
     }
     if (l.omegaMin !== undefined) {
       parts.push(`<line class="boundary" x1="${px(BOX.left)}" x2="${px(BOX.left + BOX.width)}" y1="${px(y(l.omegaMin))}" y2="${px(y(l.omegaMin))}" ${style}/>`);
+      lines.push([[BOX.left, y(l.omegaMin)], [BOX.left + BOX.width, y(l.omegaMin)]]);
     }
   }
   parts.push('</g>');
@@ -97,8 +100,9 @@ export function shortPeriodChart(condition: ConditionResult): ChartOutput {
   const cx = x(nAlpha);
   const cy = y(omega);
   const taken: Rect[] = [{ x: cx - 5, y: cy - 5, w: 10, h: 10 }];
-  const pointText = `${condition.id}: n/\u03b1 ${sig(nAlpha)}, \u03c9sp ${sig(omega)}`;
-  const pointAt = placeLabel(cx, cy, pointText, BOX, taken, 8.5);
+  // the point is named by its condition; its figures are in the caption
+  const pointText = condition.id;
+  const pointAt = placeLabel(cx, cy, pointText, BOX, taken, 8.5, lines);
 
   // Region names where a level's own band (less the better level's) is widest on screen,
   // clear of the point and its label, so that no region is known by its fill alone.
@@ -121,7 +125,7 @@ export function shortPeriodChart(condition: ConditionResult): ChartOutput {
         const mid = (y(a) + y(b)) / 2;
         const w = textWidth(`Level ${l.level}`);
         const r: Rect = { x: x(n) - w / 2, y: mid - 6, w, h: 11 };
-        if (gap > 13 && !taken.some((t) => overlaps(t, r)) && (best === null || gap > best.gap)) best = { n, mid, gap };
+        if (gap > 13 && !taken.some((t) => overlaps(t, r)) && !crossesAny(r, lines) && (best === null || gap > best.gap)) best = { n, mid, gap };
       }
     }
     if (best) {
@@ -130,26 +134,22 @@ export function shortPeriodChart(condition: ConditionResult): ChartOutput {
       parts.push(haloText(x(best.n), best.mid + 3, `Level ${l.level}`, 'region-label', 'middle'));
     }
   }
-  const worst = Math.max(...data.levels.map((l) => l.level));
-  parts.push(haloText(BOX.left + BOX.width - 4, BOX.top + BOX.height - 5, `outside Level ${worst}`, 'region-label', 'end'));
+  // "Outside" the worst level exists only where that level sets a bound: a level the criteria
+  // leave open (any value) covers the rest of the plane, and nothing is drawn as outside it.
+  const worstLevel = [...data.levels].sort((a, b) => b.level - a.level)[0]!;
+  const worst = worstLevel.level;
+  const outside = worstLevel.capMin !== undefined || worstLevel.capMax !== undefined || worstLevel.omegaMin !== undefined;
 
-  parts.push(`<g class="aircraft-point"><circle cx="${px(cx)}" cy="${px(cy)}" r="4" fill="#000" stroke="#fff" stroke-width="1.2"/></g>`);
+  parts.push(`<g class="aircraft-point mark"><circle cx="${px(cx)}" cy="${px(cy)}" r="4" fill="#000" stroke="#fff" stroke-width="1.2"/></g>`);
   parts.push(haloText(pointAt.x, pointAt.y, pointText, 'point-label', pointAt.anchor));
 
-  const ly = HEIGHT - 6;
-  let lx = BOX.left;
-  for (const l of [...data.levels].sort((a, b) => a.level - b.level)) {
-    parts.push(legendSwatch(lx, ly, levelFill(id, l.level), levelStroke(l.level), `Level ${l.level}`));
-    lx += 64;
-  }
-  parts.push(legendSwatch(lx, ly, '#fff', 'stroke="#111" stroke-width="0.6"', `outside Level ${worst}`));
-  parts.push(`<g class="legend-point"><circle cx="${px(lx + 118)}" cy="${px(ly - 3)}" r="3.5" fill="#000"/><text x="${px(lx + 125)}" y="${px(ly)}">aircraft</text></g>`);
+  parts.push(levelLegend(id, data.levels.map((l) => ({ level: l.level, open: l.capMin === undefined && l.capMax === undefined && l.omegaMin === undefined })), outside ? worst : null, HEIGHT - 20, WIDTH));
   parts.push('</svg>');
 
   const capText = data.cap?.value !== null && data.cap?.value !== undefined ? sig(data.cap.value) : '\u2013';
   const method = data.method ? ` n/\u03b1: ${data.method}.` : '';
   return {
     svg: parts.join(''),
-    caption: `Short period against n/\u03b1 with the level regions of ${condition.category ? `Category ${condition.category}` : 'the condition'}; lines are \u03c9sp = \u221a(CAP\u00b7n/\u03b1) at the CAP limits and the minimum \u03c9sp. CAP of the point ${capText} 1/(s\u00b2\u00b7g).${method}`,
+    caption: `Short period against n/\u03b1 with the level regions of ${condition.category ? `Category ${condition.category}` : 'the condition'}; lines are \u03c9sp = \u221a(CAP\u00b7n/\u03b1) at the CAP limits and the minimum \u03c9sp.${outside ? '' : ` Level ${worst} sets no bound here: any value reaches it.`} Point ${condition.id}: n/\u03b1 ${sig(nAlpha)}, \u03c9sp ${sig(omega)} rad/s, CAP ${capText} 1/(s\u00b2\u00b7g).${method}`,
   };
 }

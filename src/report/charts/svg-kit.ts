@@ -101,7 +101,10 @@ export function leftAxis(a: AxisSpec): string {
     }
   }
   const cy = a.box.top + a.box.height / 2;
-  out.push(`<text class="axis-label" transform="translate(${px(x - 30)},${px(cy)}) rotate(-90)" text-anchor="middle">${esc(a.label)}</text>`);
+  // the axis title clears the widest tick number
+  const widest = Math.max(0, ...a.ticks.filter((t) => !a.labelled || a.labelled(t)).map((t) => textWidth(plain(t, 3), 8.5)));
+  const titleX = Math.max(8, Math.min(x - 30, x - 5 - widest - 5));
+  out.push(`<text class="axis-label" transform="translate(${px(titleX)},${px(cy)}) rotate(-90)" text-anchor="middle">${esc(a.label)}</text>`);
   out.push('</g>');
   return out.join('');
 }
@@ -156,7 +159,8 @@ export function haloText(x: number, y: number, text: string, cls: string, anchor
 
 /** Rough width of a label [px] at the charts' 8-9 px type, enough to keep labels inside the frame. */
 export function textWidth(text: string, size = 8.5): number {
-  return text.length * size * 0.56;
+  // 0.6 em a character covers the bold DejaVu labels too, so no label is cut at the frame
+  return text.length * size * 0.6;
 }
 
 export interface Rect {
@@ -170,34 +174,98 @@ export function overlaps(a: Rect, b: Rect): boolean {
   return a.x < b.x + b.w && b.x < a.x + a.w && a.y < b.y + b.h && b.y < a.y + a.h;
 }
 
-/**
- * Place a label beside a point: try right-above, right-below, left-above, left-below and take
- * the first that stays inside the frame and clear of what is already placed; else nudge down.
- */
-export function placeLabel(px0: number, py0: number, text: string, box: Box, taken: Rect[], size = 8.5): { x: number; y: number; anchor: 'start' | 'end' } {
-  const w = textWidth(text, size);
-  const h = size + 2;
-  const options: { x: number; y: number; anchor: 'start' | 'end' }[] = [
-    { x: px0 + 6, y: py0 - 5, anchor: 'start' },
-    { x: px0 + 6, y: py0 + h + 2, anchor: 'start' },
-    { x: px0 - 6, y: py0 - 5, anchor: 'end' },
-    { x: px0 - 6, y: py0 + h + 2, anchor: 'end' },
-  ];
-  const rectOf = (o: { x: number; y: number; anchor: 'start' | 'end' }): Rect => ({ x: o.anchor === 'start' ? o.x : o.x - w, y: o.y - size, w, h });
-  const inside = (r: Rect) => r.x >= box.left + 2 && r.x + r.w <= box.left + box.width - 2 && r.y >= box.top + 2 && r.y + r.h <= box.top + box.height - 2;
-  for (let shift = 0; shift < 6; shift++) {
-    for (const o of options) {
-      const moved = { ...o, y: o.y + shift * h };
-      const r = rectOf(moved);
-      if (inside(r) && !taken.some((t) => overlaps(t, r))) {
-        taken.push(r);
-        return moved;
-      }
+/** A drawn line in chart pixels, as a polyline: a label must not cross it. */
+export type Polyline = readonly (readonly [number, number])[];
+
+function segmentHitsRect(a: readonly [number, number], b: readonly [number, number], r: Rect): boolean {
+  // Liang-Barsky clipping of the segment against the rectangle
+  let t0 = 0;
+  let t1 = 1;
+  const dx = b[0] - a[0];
+  const dy = b[1] - a[1];
+  const edges: [number, number][] = [[-dx, a[0] - r.x], [dx, r.x + r.w - a[0]], [-dy, a[1] - r.y], [dy, r.y + r.h - a[1]]];
+  for (const [p, q] of edges) {
+    if (p === 0) {
+      if (q < 0) return false;
+    } else {
+      const t = q / p;
+      if (p < 0) t0 = Math.max(t0, t);
+      else t1 = Math.min(t1, t);
+      if (t0 > t1) return false;
     }
   }
-  const fallback = options.find((o) => inside(rectOf(o))) ?? options[0]!;
-  taken.push(rectOf(fallback));
-  return fallback;
+  return true;
+}
+
+export function crossesAny(r: Rect, lines: readonly Polyline[]): boolean {
+  for (const l of lines) for (let i = 1; i < l.length; i++) if (segmentHitsRect(l[i - 1]!, l[i]!, r)) return true;
+  return false;
+}
+
+/**
+ * Place a label beside a point: around it at two distances (right, left, above, below and the
+ * four diagonals), taking the first spot inside the frame, clear of what is already placed and
+ * crossing none of `lines`; failing that, the spot inside the frame that hits the fewest of
+ * them. A label never leaves its point for another's neighbourhood.
+ */
+export function placeLabel(
+  px0: number, py0: number, text: string, box: Box, taken: Rect[], size = 8.5, lines: readonly Polyline[] = [],
+): { x: number; y: number; anchor: 'start' | 'end' | 'middle' } {
+  const w = textWidth(text, size);
+  const h = size + 2;
+  type Spot = { x: number; y: number; anchor: 'start' | 'end' | 'middle' };
+  const options: Spot[] = [];
+  for (const d of [6, 14]) {
+    options.push(
+      { x: px0 + d, y: py0 - 4, anchor: 'start' },
+      { x: px0 + d, y: py0 + h + 1, anchor: 'start' },
+      { x: px0 - d, y: py0 - 4, anchor: 'end' },
+      { x: px0 - d, y: py0 + h + 1, anchor: 'end' },
+      { x: px0, y: py0 - d, anchor: 'middle' },
+      { x: px0, y: py0 + d + h - 2, anchor: 'middle' },
+      { x: px0 + d, y: py0 + 3, anchor: 'start' },
+      { x: px0 - d, y: py0 + 3, anchor: 'end' },
+    );
+  }
+  const rectOf = (o: Spot): Rect => ({ x: o.anchor === 'start' ? o.x - 1 : o.anchor === 'end' ? o.x - w - 1 : o.x - w / 2 - 1, y: o.y - size, w: w + 2, h });
+  const inside = (r: Rect) => r.x >= box.left + 1 && r.x + r.w <= box.left + box.width - 1 && r.y >= box.top + 1 && r.y + r.h <= box.top + box.height - 1;
+  let best: { o: Spot; cost: number } | null = null;
+  for (const o of options) {
+    const r = rectOf(o);
+    if (!inside(r)) continue;
+    const cost = taken.filter((t) => overlaps(t, r)).length * 10 + (crossesAny(r, lines) ? 1 : 0);
+    if (cost === 0) {
+      taken.push(r);
+      return o;
+    }
+    if (best === null || cost < best.cost) best = { o, cost };
+  }
+  const chosen = best?.o ?? options[0]!;
+  taken.push(rectOf(chosen));
+  return chosen;
+}
+
+/**
+ * A legend row: swatches one after the other by their text widths, wrapping to the next line
+ * (`lineHeight` below) when the width would be passed, so no entry is cut at the edge.
+ * Returns the SVG and the number of lines used.
+ */
+export function legendRow(items: readonly { swatch: (x: number, y: number) => string; text: string; swatchWidth?: number }[], x0: number, y0: number, maxRight: number, lineHeight = 12): { svg: string; lines: number } {
+  const out: string[] = [];
+  let x = x0;
+  let y = y0;
+  let lines = 1;
+  for (const item of items) {
+    const width = (item.swatchWidth ?? 18) + textWidth(item.text, 8.5) + 10;
+    if (x > x0 && x + width > maxRight) {
+      x = x0;
+      y += lineHeight;
+      lines += 1;
+    }
+    out.push(item.swatch(x, y));
+    x += width;
+  }
+  return { svg: out.join(''), lines };
 }
 
 export function legendSwatch(x: number, y: number, fill: string, stroke: string, text: string): string {
@@ -205,4 +273,24 @@ export function legendSwatch(x: number, y: number, fill: string, stroke: string,
     `<rect x="${px(x)}" y="${px(y - 7)}" width="14" height="9" fill="${fill}" ${stroke}/>` +
     `<text x="${px(x + 18)}" y="${px(y)}">${esc(text)}</text>`
   );
+}
+
+/**
+ * The legend of a level-region chart: a swatch per level (an open level says "any value"),
+ * "outside Level N" only when the worst level sets a bound, and the aircraft's point.
+ */
+export function levelLegend(prefix: string, levels: readonly { level: number; open: boolean }[], outsideOf: number | null, y: number, width: number): string {
+  const items = [...levels].sort((a, b) => a.level - b.level).map((l) => {
+    const text = l.open ? `Level ${l.level} (any value)` : `Level ${l.level}`;
+    return { text, swatch: (x: number, yy: number) => legendSwatch(x, yy, levelFill(prefix, l.level), levelStroke(l.level), text) };
+  });
+  if (outsideOf !== null) {
+    const text = `outside Level ${outsideOf}`;
+    items.push({ text, swatch: (x, yy) => legendSwatch(x, yy, '#fff', 'stroke="#111" stroke-width="0.6"', text) });
+  }
+  items.push({
+    text: 'aircraft',
+    swatch: (x, yy) => `<g class="legend-point"><circle cx="${px(x + 7)}" cy="${px(yy - 3)}" r="3.5" fill="#000"/><text x="${px(x + 18)}" y="${px(yy)}">aircraft</text></g>`,
+  });
+  return legendRow(items, 8, y, width - 4).svg;
 }

@@ -53,10 +53,11 @@ describe('changes since the baseline', () => {
     expect(view.summary[0]).toBe('\u25bc 1 worse');
   });
 
-  it('shows the section in the document after the envelope summary, regression before improvement', () => {
+  it('shows the section right after the outcome, before the envelope summary, regression before improvement', () => {
     const html = renderHtml(buildReportView(current.results, current.sets, { reportId: 'MG-CMP', comparison }));
     const section = html.slice(html.indexOf('<section class="comparison"'), html.indexOf('</section>', html.indexOf('<section class="comparison"')));
-    expect(html.indexOf('id="envelope-summary"')).toBeLessThan(html.indexOf('id="changes-since-baseline"'));
+    expect(html.indexOf('id="changes-since-baseline"')).toBeLessThan(html.indexOf('id="envelope-summary"'));
+    expect(html.indexOf('class="outcome"')).toBeLessThan(html.indexOf('id="changes-since-baseline"'));
     const kinds = [...section.matchAll(/data-kind="(\w+)"/g)].map((m) => m[1]);
     expect(kinds.slice(0, 2)).toEqual(['worse', 'better']);
     expect(section).toContain('Changes since the baseline');
