@@ -310,7 +310,10 @@ export interface CriteriaSetView {
   phaseCategories: string;
   /** Markdown, root of the chain first */
   notes: string[];
+  /** the criteria that select at least one condition of this review */
   criteria: CriterionNoteView[];
+  /** ids of the set's other criteria (no condition of this review selects them) */
+  unselected: string[];
   dropped: { id: string; reason: string; by: string }[];
 }
 

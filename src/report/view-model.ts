@@ -7,7 +7,7 @@ import { countVerdicts } from '../results.js';
 import { EVIDENCE_ORDER, weaker } from '../criteria/evidence.js';
 import { expandLevels } from '../criteria/level-bounds.js';
 import type {
-  ConditionResult, DynamicsForm, EvidenceClass, Finding, ResolvedCriteriaSet, ResolvedCriterion, ResultMode, Results, SourceEntry, VerdictCounts,
+  ConditionResult, DynamicsForm, EvidenceClass, Finding, Quantity, ResolvedCriteriaSet, ResolvedCriterion, ResultMode, Results, SourceEntry, VerdictCounts,
 } from '../types.js';
 import { EVIDENCE_MEANING, evidenceGroups, levelClassesText } from './evidence-text.js';
 import { STANDING_CAUTIONS } from './cautions.js';
@@ -203,19 +203,29 @@ function overviewView(results: Results, anchorOf: (index: number) => string | nu
   };
 }
 
-function setView(set: ResolvedCriteriaSet): CriteriaSetView {
+/**
+ * `used`: ids of the criteria that select at least one condition of this review (a finding or a
+ * declared not-applicable); the others are named in one line, not given a row each: their notes
+ * and evidence are about aircraft or phases this review does not cover (`criteria show` lists them).
+ */
+function marginalBandText(set: ResolvedCriteriaSet): string {
   const band = set.marginalBand;
-  const absolute = Object.entries(band.absolute).map(([q, v]) => `${q} ${sig(v)}`);
+  const absolute = Object.entries(band.absolute).map(([q, v]) => `${QUANTITY_LABEL[q as Quantity] ?? q} ${sig(v)}`);
+  return `${sig(band.relative * 100, 2)} % of the boundary${absolute.length > 0 ? `; where the boundary is 0: ${absolute.join(', ')}` : ''}`;
+}
+
+function setView(set: ResolvedCriteriaSet, used?: ReadonlySet<string>): CriteriaSetView {
   return {
     id: set.id,
     title: set.title,
     chain: set.chain.join(' \u2192 '),
     files: set.files,
     defaultRequiredLevel: `Level ${set.defaultRequiredLevel}`,
-    marginalBand: `${sig(band.relative * 100, 2)} % of the boundary${absolute.length > 0 ? `; where the boundary is 0: ${absolute.join(', ')}` : ''}`,
+    marginalBand: marginalBandText(set),
     phaseCategories: Object.entries(set.phaseCategories).map(([p, c]) => `${p} ${c}`).join(', ') || 'none listed',
     notes: set.notes,
-    criteria: set.criteria.map((c) => ({
+    unselected: used ? set.criteria.filter((c) => !used.has(c.id)).map((c) => c.id) : [],
+    criteria: set.criteria.filter((c) => !used || used.has(c.id)).map((c) => ({
       id: c.id,
       title: c.title,
       source: c.source,
@@ -336,7 +346,7 @@ function commandText(args: readonly string[]): string {
 
 /** What "marginal" means here, with each set's band: the term is modalgate's own, not the standards'. */
 function marginalText(sets: ResolvedCriteriaSet[]): string {
-  const bands = sets.map((s) => `${setView(s).marginalBand} (${s.id})`);
+  const bands = sets.map((s) => `${marginalBandText(s)} (${s.id})`);
   return (
     'Marginal is this tool\'s own word, not a level of the standards: the required level is reached, but the value lies ' +
     `within the marginal band of that level's boundary: ${bands.length > 0 ? bands.join('; ') : 'no criteria set'}. ` +
@@ -346,6 +356,7 @@ function marginalText(sets: ResolvedCriteriaSet[]): string {
 
 export function buildReportView(results: Results, sets: ResolvedCriteriaSet[], options: ReportViewOptions): ReportView {
   const allFindings = results.conditions.flatMap((c) => c.findings);
+  const usedCriteria = new Set([...allFindings.map((f) => f.criterion), ...results.conditions.flatMap((c) => c.notApplicable.map((n) => n.criterion))]);
   const counts = countVerdicts(allFindings);
   const selection = selectDetail(results.conditions, options.detail ?? 'all');
   const anchors: (string | null)[] = results.conditions.map(() => null);
@@ -368,7 +379,7 @@ export function buildReportView(results: Results, sets: ResolvedCriteriaSet[], o
     generatedAt: results.generatedAt,
     tool: { name: results.tool.name, version: results.tool.version },
     modelFiles: results.inputs.filter((i) => i.role === 'model' || i.role === 'table').map((i) => i.path),
-    criteriaSets: sets.map(setView),
+    criteriaSets: sets.map((s) => setView(s, usedCriteria)),
     requiredLevels: requiredLevelsText(results.conditions),
     overall: verdictMark(worstVerdict(allFindings.map((f) => f.verdict))),
     tally: tallyOf(counts),
