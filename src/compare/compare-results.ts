@@ -5,7 +5,7 @@
  * before. Pure: the caller reads the baseline file (see parseBaselineResults).
  */
 import { countVerdicts } from '../results.js';
-import type { ConditionResult, Finding, Level, ModeKind, Quantity, Results, Verdict, VerdictCounts } from '../types.js';
+import type { ConditionResult, EvidenceClass, Finding, Level, ModeKind, Quantity, Results, Verdict, VerdictCounts } from '../types.js';
 import { isRealMode, modeStability, type Stability } from '../modes/stability.js';
 import { figureChange, type FigureChange } from './figure-change.js';
 import { compareInputs, type InputsComparison } from './input-changes.js';
@@ -26,6 +26,8 @@ export interface FindingChange {
   unit: string;
   transition: TransitionKind;
   verdict: { baseline: Verdict; current: Verdict };
+  /** evidence class of the boundary judged against, in each run */
+  evidence: { baseline: EvidenceClass; current: EvidenceClass };
   /** best level reached in each run (null: none) */
   level: { baseline: Level | null; current: Level | null };
   /** [unit] the bounded figure */
@@ -94,6 +96,8 @@ export interface Comparison {
   criteria: { added: string[]; removed: string[] };
   /** criteria set ids in one run only */
   criteriaSets: { added: string[]; removed: string[] };
+  /** criteria whose boundaries' evidence changed between the runs, with how many findings it concerns */
+  evidenceChanges: { criterion: string; baseline: EvidenceClass; current: EvidenceClass; findings: number }[];
   /** every finding in both runs: regressions first (most concerning first), then improvements, then unchanged */
   findings: FindingChange[];
   findingsAdded: FindingPresence[];
@@ -139,6 +143,7 @@ export function compareResults(current: Results, baseline: Results): Comparison 
     conditions: { added, removed, common },
     criteria: setDifference(criterionIds(current), criterionIds(baseline)),
     criteriaSets: setDifference(current.criteriaSets.map((s) => s.id), baseline.criteriaSets.map((s) => s.id)),
+    evidenceChanges: evidenceChanges(ordered),
     findings: ordered,
     findingsAdded,
     findingsRemoved,
@@ -188,6 +193,7 @@ function pairFindings(now: ConditionResult, before: ConditionResult) {
       unit: finding.unit,
       transition: classifyTransition(old.verdict, finding.verdict),
       verdict: { baseline: old.verdict, current: finding.verdict },
+      evidence: { baseline: old.evidence.class, current: finding.evidence.class },
       level: { baseline: old.level, current: finding.level },
       value: figureChange(old.value, finding.value),
       margin: figureChange(old.margin, finding.margin),
@@ -195,6 +201,19 @@ function pairFindings(now: ConditionResult, before: ConditionResult) {
   }
   const removed = [...beforeByKey].filter(([key]) => !matched.has(key)).map(([, f]) => findingPresence(now.id, f));
   return { changes, added, removed };
+}
+
+/** Changes of boundary evidence, one row per criterion and pair of classes, in the order first met. */
+function evidenceChanges(findings: readonly FindingChange[]): Comparison['evidenceChanges'] {
+  const rows = new Map<string, Comparison['evidenceChanges'][number]>();
+  for (const f of findings) {
+    if (f.evidence.baseline === f.evidence.current) continue;
+    const key = `${f.criterion}\u0000${f.evidence.baseline}\u0000${f.evidence.current}`;
+    const row = rows.get(key);
+    if (row) row.findings += 1;
+    else rows.set(key, { criterion: f.criterion, baseline: f.evidence.baseline, current: f.evidence.current, findings: 1 });
+  }
+  return [...rows.values()];
 }
 
 function pairModes(now: ConditionResult, before: ConditionResult): ModeFigureChange[] {

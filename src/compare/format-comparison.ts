@@ -73,6 +73,10 @@ export function formatComparisonText(written: Comparison, options: { color: bool
   if (c.criteria.removed.length > 0) lines.push('', `- Criteria removed: ${c.criteria.removed.join(', ')}`);
   if (c.criteriaSets.added.length > 0) lines.push(`+ Criteria sets added: ${c.criteriaSets.added.join(', ')}`);
   if (c.criteriaSets.removed.length > 0) lines.push(`- Criteria sets removed: ${c.criteriaSets.removed.join(', ')}`);
+  if (c.evidenceChanges.length > 0) {
+    lines.push('', `Boundary evidence changed (${c.evidenceChanges.length})`);
+    lines.push(...c.evidenceChanges.map((e) => `  ${e.criterion}: ${e.baseline} -> ${e.current} (${e.findings} finding(s))`));
+  }
 
   const moved = largestModeChanges(c.modes);
   if (moved.length > 0) {

@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { compareResults } from '../../src/compare/compare-results.js';
+import { formatComparisonText } from '../../src/compare/format-comparison.js';
+import { comparisonView } from '../../src/report/comparison/comparison-view.js';
 import type { InputFile, Verdict } from '../../src/types.js';
 import { condition, finding, mode, results } from './results-fixture.js';
 
@@ -136,6 +138,28 @@ describe('compareResults: conditions and criteria that came or went', () => {
   it('notices an aircraft renamed or reclassed', () => {
     expect(cmp.aircraftChanged).toBe(false);
     expect(compareResults(results({ aircraft: { name: 'Test aircraft', class: 'III' } }), base).aircraftChanged).toBe(true);
+  });
+
+  it('names the criteria whose boundary evidence changed, with the findings it concerns', () => {
+    const before = results({
+      conditions: [
+        condition({ id: 'CR-1', findings: [finding({ criterion: 'a', verdict: 'pass' }), finding({ criterion: 'b', verdict: 'pass' })] }),
+        condition({ id: 'CR-2', findings: [finding({ criterion: 'a', verdict: 'pass' })] }),
+      ],
+    });
+    const read = { class: 'published' as const, sources: ['spec'] };
+    const after = results({
+      conditions: [
+        condition({ id: 'CR-1', findings: [finding({ criterion: 'a', verdict: 'pass', evidence: read }), finding({ criterion: 'b', verdict: 'pass' })] }),
+        condition({ id: 'CR-2', findings: [finding({ criterion: 'a', verdict: 'pass', evidence: read })] }),
+      ],
+    });
+    const cmp = compareResults(after, before);
+    expect(cmp.evidenceChanges).toEqual([{ criterion: 'a', baseline: 'memory', current: 'published', findings: 2 }]);
+    expect(cmp.findings.find((f) => f.criterion === 'a')?.evidence).toEqual({ baseline: 'memory', current: 'published' });
+    expect(formatComparisonText(cmp, { color: false })).toContain('Boundary evidence changed (1)\n  a: memory -> published (2 finding(s))');
+    expect(comparisonView(cmp, () => null).criteriaChanges).toContain('boundary evidence of a: memory \u2192 published (2 findings)');
+    expect(compareResults(before, before).evidenceChanges).toEqual([]);
   });
 
   it('reports criteria sets added and removed', () => {

@@ -136,6 +136,7 @@ export function comparisonView(c: Comparison, anchorOf: (conditionId: string) =>
     ...(c.criteria.removed.length > 0 ? [`criteria judged in the baseline only: ${c.criteria.removed.join(', ')}`] : []),
     ...(c.criteriaSets.added.length > 0 ? [`criteria sets added: ${c.criteriaSets.added.join(', ')}`] : []),
     ...(c.criteriaSets.removed.length > 0 ? [`criteria sets removed: ${c.criteriaSets.removed.join(', ')}`] : []),
+    ...c.evidenceChanges.map((e) => `boundary evidence of ${e.criterion}: ${e.baseline} \u2192 ${e.current} (${e.findings} finding${e.findings === 1 ? '' : 's'})`),
   ];
   const presenceTotal = c.findingsAdded.length + c.findingsRemoved.length;
   const presenceShown = Math.min(c.findingsAdded.length, limits.presence) + Math.min(c.findingsRemoved.length, limits.presence);
