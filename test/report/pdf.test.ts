@@ -59,6 +59,13 @@ describe('renderPdf', () => {
     expect(text).toMatch(/from memory/);
   });
 
+  it('prints the evidence count on the first page and the list of sources on the last', () => {
+    const pages = text.split('\f').filter((p) => p.trim() !== '');
+    expect(pages[0]).toMatch(/on boundaries not read in the primary\s+document/);
+    expect(pages[pages.length - 1]).toContain('Sources of the boundaries');
+    expect(pages[pages.length - 1]).toContain('lt6-hq-spec');
+  });
+
   it('carries the report id and page x of y on every page', () => {
     const pages = text.split('\f').filter((p) => p.trim() !== '');
     pages.forEach((page, i) => {
