@@ -2,6 +2,7 @@
 import type { ConditionEvaluation } from './criteria/evaluate.js';
 import type {
   AircraftModel,
+  ConditionResponses,
   ConditionResult,
   Finding,
   FlightCondition,
@@ -33,6 +34,7 @@ export function assembleCondition(
   analysis: ModalAnalysis,
   evaluations: ConditionEvaluation[],
   contents: ResultsContents,
+  responses: ConditionResponses | null,
 ): ConditionResult {
   const first = evaluations[0];
   const requiredLevel = first?.requiredLevel ?? condition.requiredLevel;
@@ -53,6 +55,7 @@ export function assembleCondition(
     modes: contents.modeShapes ? analysis.modes : analysis.modes.map(withoutShape),
     findings: evaluations.flatMap((e) => e.findings),
     notApplicable: evaluations.flatMap((e) => e.notApplicable),
+    responses,
     warnings,
     notes: condition.notes,
   };

@@ -191,6 +191,8 @@ export type Verdict = 'pass' | 'marginal' | 'fail' | 'not_evaluated';
  * - damping_frequency_product zeta omega_n [rad/s]
  * - time_to_double            [s] (a convergent mode has an infinite time to double)
  * - time_constant             [s] of a real root
+ * - time_to_bank              [s] to change bank by `params.bankAngle` [rad] after a step of
+ *                             full roll control (a response figure, evaluated with or without a roll mode)
  */
 export type Quantity =
   | 'damping_ratio'
@@ -198,7 +200,8 @@ export type Quantity =
   | 'cap'
   | 'damping_frequency_product'
   | 'time_to_double'
-  | 'time_constant';
+  | 'time_constant'
+  | 'time_to_bank';
 
 /** Bounds of one level: min and/or max of the quantity (SI). */
 export interface Bound {
@@ -263,8 +266,119 @@ export interface ConditionResult {
   findings: Finding[];
   /** applicable criteria that make no finding here, with the reason */
   notApplicable: NotApplicable[];
+  /** responses to the cockpit controls; null when the condition names none */
+  responses: ConditionResponses | null;
   warnings: string[];
   /** conversions and defaults applied */
+  notes: string[];
+}
+
+// ---------------------------------------------------------------- responses to the pilot's controls
+
+/** A figure, or null and why not (never a stand-in value). */
+export type ResponseFigure = { value: number; method: string } | { value: null; reason: string };
+
+export interface ResponseControl {
+  axis: ControlAxis;
+  input: string;
+  /** the input's unit as written */
+  unit: string;
+  /** [input unit] full control, null when not given */
+  max: number | null;
+  /** true when the model's positive input is the pilot's negative (the responses are given for the pilot's sense) */
+  signReversed: boolean;
+}
+
+/** G(s) = gain prod(s - zeros) / prod(s - poles), in the pilot's sense of the control. */
+export interface TransferFunction {
+  axis: ControlAxis;
+  input: string;
+  /** a state name, an output of C/D, or a derived output (nz) */
+  output: string;
+  /** unit of the output: rad, rad/s, g, or 'as written' for an output row of the model */
+  outputUnit: string;
+  /** [output unit per input unit, times (rad/s)^relativeDegree] d where d != 0, else c A^(r-1) b; 0 when there is no path */
+  gain: number;
+  /** [rad/s] finite transmission zeros (with the eigenvalues of states the channel cannot see, which cancel poles) */
+  zeros: Complex[];
+  /** [rad/s] every eigenvalue of A */
+  poles: Complex[];
+  /** poles minus zeros; null when the channel is identically zero */
+  relativeDegree: number | null;
+}
+
+/** Bandwidth and phase delay of an attitude response (MIL-STD-1797A 4.2.1.2 guidance); see src/responses/bandwidth.ts. */
+export interface BandwidthFigures {
+  /** [rad/s] */
+  omega180: number | null;
+  /** [rad/s] */
+  bandwidthPhase: number | null;
+  /** [rad/s] */
+  bandwidthGain: number | null;
+  /** [rad/s] */
+  bandwidth: number | null;
+  /** which of the two the bandwidth is */
+  bandwidthFrom: 'phase' | 'gain' | null;
+  /** [s] */
+  phaseDelay: number | null;
+  /** [rad/s] the band searched */
+  range: [number, number];
+  responseType: 'rate' | 'attitude';
+  /** why a figure is null, by figure name */
+  reasons: Partial<Record<'omega180' | 'bandwidthPhase' | 'bandwidthGain' | 'bandwidth' | 'phaseDelay', string>>;
+}
+
+/** The bandwidth figures of theta / pitch control. */
+export interface PitchBandwidth extends BandwidthFigures {
+  input: string;
+  output: 'theta';
+  /** how the phase branch and the response type were chosen */
+  method: string;
+}
+
+export interface BankTime {
+  /** [rad] bank angle change */
+  angle: number;
+  /** [s] from the start of the full roll-control step; null when not reached within the simulated time */
+  time: number | null;
+}
+
+export interface ConditionResponses {
+  controls: ResponseControl[];
+  transferFunctions: TransferFunction[];
+  /** trade figures from the numerators */
+  figures: {
+    /** [rad/s] 1/Ttheta2 from the q / pitch numerator */
+    inverseTtheta2: ResponseFigure;
+    /** [rad/s] omega_phi from the phi / roll numerator */
+    omegaPhi: ResponseFigure;
+    /** [-] zeta_phi */
+    zetaPhi: ResponseFigure;
+    /** [-] omega_phi / omega_d */
+    omegaPhiOverOmegaD: ResponseFigure;
+  };
+  /** null with `pitchReason` when there is no pitch control or no theta */
+  pitch: PitchBandwidth | null;
+  pitchReason: string | null;
+  /** after a step of full roll control; empty with `timeToBankReason` when it cannot be had */
+  timeToBank: BankTime[];
+  timeToBankReason: string | null;
+  /** [s] simulated time of the step responses */
+  simulatedTime: number;
+  /** after the full roll-control step */
+  roll: {
+    /** [-] p_osc / p_av */
+    rollRateOscillation: ResponseFigure;
+    /** [deg] psi_beta, phase of the Dutch roll in sideslip */
+    sideslipPhase: ResponseFigure;
+    /** [rad] largest adverse sideslip (nose away from the roll) in the first max(2 s, T_d/2) */
+    adverseSideslip: ResponseFigure;
+    /** [rad] largest proverse sideslip in the same time */
+    proverseSideslip: ResponseFigure;
+  } | null;
+  /** what of the curves the results hold */
+  curves: string;
+  /** how outputs were derived, sign reversals, outputs that could not be had */
   notes: string[];
 }
 

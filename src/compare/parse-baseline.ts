@@ -217,6 +217,8 @@ function toConditionResult(c: WrittenCondition): ConditionResult {
     warnings: c.warnings ?? [],
     notes: c.notes ?? [],
     notApplicable: [],
+    // a baseline is compared by its findings and modes; its responses are not read back
+    responses: null,
   };
   if (missing.length > 0) result.notes = [...result.notes, `baseline file gave no ${missing.join(', ')}: stand-ins used, not for display`];
   return result;

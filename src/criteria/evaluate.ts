@@ -6,6 +6,7 @@ import { InputError } from '../errors.js';
 import type {
   AircraftClass,
   Category,
+  ConditionResponses,
   Finding,
   FlightCondition,
   Level,
@@ -17,7 +18,7 @@ import type {
   NotApplicable,
 } from '../types.js';
 import { flat } from '../flat-string.js';
-import { evaluators } from './evaluators.js';
+import { evaluators, isResponseRow } from './evaluators.js';
 import { findingEvidence } from './evidence.js';
 import { expandedLevelsOf, expandLevels, levelKey } from './level-bounds.js';
 import { judge } from './verdict.js';
@@ -37,8 +38,11 @@ export function evaluateCondition(input: {
   condition: FlightCondition;
   analysis: ModalAnalysis;
   set: ResolvedCriteriaSet;
+  /** the responses to the cockpit controls; absent or null when the condition names none */
+  responses?: ConditionResponses | null;
 }): ConditionEvaluation {
   const { aircraftClass, condition, analysis, set } = input;
+  const responses = input.responses ?? null;
   const category = set.phaseCategories[condition.phase];
   if (category === undefined) {
     const known = Object.keys(set.phaseCategories);
@@ -66,6 +70,15 @@ export function evaluateCondition(input: {
       findings.push(notEvaluatedHere(criterion, requiredLevel, `the criterion applies by altitude and condition '${condition.id}' gives no altitude`));
       continue;
     }
+    if (isResponseRow(evaluators[criterion.quantity])) {
+      // a model that names no cockpit controls asks for modes only: said, never passed
+      if (responses === null) {
+        notApplicable.push({ criterion: criterion.id, set: criterion.set, title: criterion.title, source: criterion.source, reason: NO_CONTROLS });
+        continue;
+      }
+      findings.push(evaluateOne({ criterion, mode: null, condition, analysis, aircraftClass, requiredLevel, set, responses }));
+      continue;
+    }
     const modes: Mode[] = [];
     for (const m of analysis.modes) if (m.kind === criterion.mode) modes.push(m);
     const absentMeans = criterion.params['notApplicableIfModeAbsent'];
@@ -80,7 +93,7 @@ export function evaluateCondition(input: {
     if (modes.length > 1) {
       warnings.push(`${modes.length} modes identified as ${criterion.mode}: criterion ${criterion.id} is evaluated for each`);
     }
-    for (const mode of modes) findings.push(evaluateOne({ criterion, mode, condition, analysis, aircraftClass, requiredLevel, set }));
+    for (const mode of modes) findings.push(evaluateOne({ criterion, mode, condition, analysis, aircraftClass, requiredLevel, set, responses }));
   }
   warnings.push(...uncoveredModes(set, analysis, aircraftClass, category, condition.phase));
   return { category, requiredLevel, requiredLevelFrom, findings, notApplicable, warnings: warnings.map(flat) };
@@ -156,6 +169,8 @@ function altitudeApplies(c: ResolvedCriterion, condition: FlightCondition): 'ins
   return 'inside';
 }
 
+const NO_CONTROLS = 'the condition names no cockpit controls (a response criterion needs them, e.g. controls.roll with max for roll performance)';
+
 function absentModeReason(c: ResolvedCriterion, analysis: ModalAnalysis): string {
   const written = c.params['ifModeAbsent'];
   if (typeof written === 'string') return written;
@@ -219,20 +234,22 @@ function judged(
 
 function evaluateOne(args: {
   criterion: ResolvedCriterion;
-  mode: Mode;
+  /** null for a response figure (no mode needed) */
+  mode: Mode | null;
   condition: FlightCondition;
   analysis: ModalAnalysis;
   aircraftClass: AircraftClass;
   requiredLevel: Level;
   set: ResolvedCriteriaSet;
+  responses: ConditionResponses | null;
 }): Finding {
   const { criterion, mode, requiredLevel, set } = args;
   const row = evaluators[criterion.quantity];
-  const result = row.evaluate(mode, args);
+  const result = isResponseRow(row) ? row.evaluateResponses(args) : mode ? row.evaluate(mode, args) : { value: null, reason: 'no mode' };
   const levels = result.adjustedBounds ?? criterion.levels;
   const bounds = levels === criterion.levels ? expandedLevelsOf(levels) : expandLevels(levels);
   const evidence = findingEvidence(criterion, requiredLevel, levels !== criterion.levels && adjustedAt(criterion, bounds, requiredLevel));
-  const ambiguity = mode.ambiguous ? ' (mode identification not clear-cut)' : '';
+  const ambiguity = mode?.ambiguous ? ' (mode identification not clear-cut)' : '';
   const method = result.method;
   const divergentDamping = row.damping && result.divergent === true;
   const allowedFrom = criterion.params['divergenceAllowedFromLevel'];

@@ -3,7 +3,7 @@
  * and criterion) into the value to hold against the criterion's bounds. Adding a kind of
  * check adds a row here and a name to `Quantity` in src/types.ts.
  */
-import type { AircraftClass, FlightCondition, LevelBounds, ModalAnalysis, Mode, Quantity, ResolvedCriterion } from '../types.js';
+import type { AircraftClass, ConditionResponses, FlightCondition, LevelBounds, ModalAnalysis, Mode, Quantity, ResolvedCriterion } from '../types.js';
 import {
   controlAnticipation,
   dampingFrequencyProduct,
@@ -18,6 +18,8 @@ export interface EvaluatorContext {
   condition: FlightCondition;
   analysis: ModalAnalysis;
   criterion: ResolvedCriterion;
+  /** the condition's responses to its cockpit controls (null when it names none) */
+  responses: ConditionResponses | null;
 }
 
 export interface Evaluation {
@@ -31,12 +33,25 @@ export interface Evaluation {
   divergent?: boolean;
 }
 
-export interface EvaluatorRow {
+export interface ModeEvaluatorRow {
   /** SI unit of the quantity, as shown */
   unit: string;
   /** a damping figure: a divergent mode fails it whatever the value */
   damping: boolean;
   evaluate(mode: Mode, context: EvaluatorContext): Evaluation;
+}
+
+/** A figure of the responses to the cockpit controls: one finding per criterion, whatever modes there are. */
+export interface ResponseEvaluatorRow {
+  unit: string;
+  damping: false;
+  evaluateResponses(context: EvaluatorContext): Evaluation;
+}
+
+export type EvaluatorRow = ModeEvaluatorRow | ResponseEvaluatorRow;
+
+export function isResponseRow(row: EvaluatorRow): row is ResponseEvaluatorRow {
+  return 'evaluateResponses' in row;
 }
 
 export const evaluators: Record<Quantity, EvaluatorRow> = {
@@ -111,6 +126,27 @@ export const evaluators: Record<Quantity, EvaluatorRow> = {
       // tau = -1/lambda (common practice); a root at 0 has no finite time constant.
       const value = root.re === 0 ? Infinity : -1 / root.re;
       return { value, divergent, method: 'tau = -1/lambda' };
+    },
+  },
+
+  time_to_bank: {
+    unit: 's',
+    damping: false,
+    evaluateResponses: ({ criterion, responses }) => {
+      const angle = criterion.params['bankAngle'];
+      if (typeof angle !== 'number' || !(angle > 0)) return { value: null, reason: `criterion ${criterion.id} gives no positive params.bankAngle [rad]` };
+      if (responses === null) return { value: null, reason: 'the condition names no cockpit controls (controls.roll with max is needed)' };
+      const deg = `${Number((angle * 180 / Math.PI).toPrecision(4))} deg`;
+      if (responses.timeToBank.length === 0) return { value: null, reason: responses.timeToBankReason ?? 'no time to bank' };
+      const entry = responses.timeToBank.find((t) => Math.abs(t.angle - angle) < 1e-9);
+      if (!entry) return { value: null, reason: `no time to bank was computed for ${deg}` };
+      const control = responses.controls.find((c) => c.axis === 'roll');
+      const step = control ? `after a step of full roll control (${control.input} = ${control.max} ${control.unit}) from trim` : 'after a step of full roll control';
+      if (entry.time === null) {
+        // never reached in the simulated time: longer than any bound that time could show
+        return { value: Infinity, method: `bank angle change of ${deg} not reached within ${responses.simulatedTime} s ${step}` };
+      }
+      return { value: entry.time, method: `time to change bank by ${deg} ${step}` };
     },
   },
 };

@@ -19,4 +19,5 @@ export const DEFAULT_ABSOLUTE_BAND: Record<Quantity, number> = {
   damping_frequency_product: 0.01,
   time_to_double: 1,
   time_constant: 0.05,
+  time_to_bank: 0.1,
 };

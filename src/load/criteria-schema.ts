@@ -25,6 +25,7 @@ export const quantities = [
   'damping_frequency_product',
   'time_to_double',
   'time_constant',
+  'time_to_bank',
 ] as const;
 
 const idText = z.string().regex(/^[a-z0-9]+(?:[-_.][a-z0-9]+)*$/, 'an id of lower-case letters, digits and - _ .');

@@ -19,6 +19,7 @@ export const QUANTITY_LABEL: Record<Quantity, string> = {
   damping_frequency_product: '\u03b6\u03c9n',
   time_to_double: 'time to double',
   time_constant: 'time constant',
+  time_to_bank: 'time to bank',
 };
 
 /** Fallback units when a finding arrives without one (the quantity fixes its SI unit). */
@@ -29,6 +30,7 @@ export const QUANTITY_UNIT: Record<Quantity, string> = {
   damping_frequency_product: 'rad/s',
   time_to_double: 's',
   time_constant: 's',
+  time_to_bank: 's',
 };
 
 export function classLabel(cls: AircraftClass): string {
@@ -58,4 +60,5 @@ export const QUANTITY_TEXT: Record<Quantity, string> = {
   damping_frequency_product: 'zeta*omega_n',
   time_to_double: 'time to double',
   time_constant: 'time constant',
+  time_to_bank: 'time to bank',
 };

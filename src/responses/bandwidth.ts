@@ -13,29 +13,11 @@
  * Works on any FrequencySource (model, zpk or sampled points); each figure that cannot be
  * found in the band is null with the reason.
  */
+import type { BandwidthFigures } from '../types.js';
 import { responseReader, type FrequencySource, type PhaseAnchor, type ResponseReader } from './frequency-response.js';
 
-export type ResponseType = 'rate' | 'attitude';
-
-export interface BandwidthFigures {
-  /** [rad/s] */
-  omega180: number | null;
-  /** [rad/s] */
-  bandwidthPhase: number | null;
-  /** [rad/s] */
-  bandwidthGain: number | null;
-  /** [rad/s] */
-  bandwidth: number | null;
-  /** which of the two the bandwidth is */
-  bandwidthFrom: 'phase' | 'gain' | null;
-  /** [s] */
-  phaseDelay: number | null;
-  /** [rad/s] the band searched */
-  range: [number, number];
-  responseType: ResponseType;
-  /** why a figure is null, by figure name */
-  reasons: Partial<Record<'omega180' | 'bandwidthPhase' | 'bandwidthGain' | 'bandwidth' | 'phaseDelay', string>>;
-}
+export type ResponseType = BandwidthFigures['responseType'];
+export type { BandwidthFigures };
 
 export interface BandwidthOptions {
   responseType: ResponseType;

@@ -6,6 +6,8 @@
 import { evaluateCondition } from '../criteria/evaluate.js';
 import { InputError, type InputIssue } from '../errors.js';
 import { analyseModes } from '../modes/analyse.js';
+import { analyseResponses } from '../responses/analyse-responses.js';
+import { bankAnglesOf } from '../criteria/bank-angles.js';
 import { assembleCondition } from '../results.js';
 import type { AircraftClass, ConditionResult, FlightCondition, ResolvedCriteriaSet, ResultsContents, VerdictCounts } from '../types.js';
 
@@ -57,14 +59,15 @@ export function checkOneCondition(
   issues: InputIssue[],
 ): ConditionResult {
   const analysis = analyseModes(condition.system, { airspeed: condition.airspeed });
+  const responses = analyseResponses(condition, analysis, { bankAngles: bankAnglesOf(sets) });
   const evaluations = [];
   for (const set of sets) {
     try {
-      evaluations.push(evaluateCondition({ aircraftClass, condition, analysis, set }));
+      evaluations.push(evaluateCondition({ aircraftClass, condition, analysis, set, responses }));
     } catch (err) {
       if (err instanceof InputError) issues.push(...err.issues);
       else throw err;
     }
   }
-  return assembleCondition(condition, analysis, evaluations, contents);
+  return assembleCondition(condition, analysis, evaluations, contents, responses);
 }

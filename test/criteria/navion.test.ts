@@ -89,7 +89,7 @@ describe('Navion (Nelson 2nd ed.), Class I', () => {
     expect(f['dutch-roll-frequency-cat-b']!.value).toBeCloseTo(2.3851, 4);
     // 3.3.1.4: no coupled roll-spiral oscillation, so the requirement does not apply
     expect(f['roll-spiral-coupling']).toBeUndefined();
-    expect(r.notApplicable.map((n) => n.criterion)).toEqual(['roll-spiral-coupling']);
+    expect(r.notApplicable.map((n) => n.criterion)).toEqual(['roll-performance-class-i-cat-b', 'roll-spiral-coupling']);
     expect(r.findings).toHaveLength(9);
     expect(r.findings.every((x) => x.level === 1 && x.verdict === 'pass')).toBe(true);
   });
@@ -110,7 +110,7 @@ describe('Navion (Nelson 2nd ed.), Class I', () => {
     // 3.3.1.1 Cat C Class I: omega 2.385 >= 1.0
     expect(f['dutch-roll-frequency-cat-c-light']).toMatchObject({ level: 1, verdict: 'pass' });
     expect(r.findings.every((x) => x.level === 1 && x.verdict === 'pass')).toBe(true);
-    expect(r.notApplicable.map((n) => n.criterion)).toEqual(['roll-spiral-coupling']);
+    expect(r.notApplicable.map((n) => n.criterion)).toEqual(['roll-performance-class-i-cat-c', 'roll-spiral-coupling']);
     expect(r.findings).toHaveLength(10);
   });
 

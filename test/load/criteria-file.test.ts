@@ -77,7 +77,7 @@ describe('loadCriteriaSet: bad files (messages pinned)', () => {
     [
       'unknown quantity',
       `${bad}/unknown-quantity.yaml`,
-      `${bad}/unknown-quantity.yaml:8:15: criteria[0].quantity: not one of the allowed values (expected "damping_ratio" | "natural_frequency" | "cap" | "damping_frequency_product" | "time_to_double" | "time_constant", found "period") [invalid_value]`,
+      `${bad}/unknown-quantity.yaml:8:15: criteria[0].quantity: not one of the allowed values (expected "damping_ratio" | "natural_frequency" | "cap" | "damping_frequency_product" | "time_to_double" | "time_constant" | "time_to_bank", found "period") [invalid_value]`,
     ],
     [
       'heavily-damped threshold left unset (14 CFR 25.181 gives no number)',
