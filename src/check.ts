@@ -3,7 +3,7 @@
  * analyse modes -> resolve criteria -> evaluate findings -> results. Writers (terminal, JSON,
  * JUnit, HTML, PDF) take the results from here; nothing in this file prints or writes.
  */
-import { dedupeIssues, InputError } from './errors.js';
+import { dedupeIssues, InputError, type InputIssue } from './errors.js';
 import { checkSourceIdsAgree } from './criteria/evidence.js';
 import { loadCriteriaSet } from './load/criteria-file.js';
 import { loadModel } from './load/load-model.js';
@@ -61,7 +61,7 @@ export interface CheckOutcome {
 
 export async function runCheck(request: CheckRequest): Promise<CheckOutcome> {
   const { model, files: modelFiles } = await loadModel(request.model, { trustedFolders: request.trustedFolders ?? [] });
-  const loaded = await Promise.all(request.criteria.map((ref) => loadCriteriaSet(ref)));
+  const loaded = refuseRepeatedSets(await Promise.all(request.criteria.map((ref) => loadCriteriaSet(ref))), request.criteria);
   const sets = loaded.map((l) => l.set);
   checkSourceIdsAgree(sets);
 
@@ -85,4 +85,28 @@ export async function runCheck(request: CheckRequest): Promise<CheckOutcome> {
 
   const results = assembleResults({ request, model, sets, inputs, contents, conditions, summary });
   return { model, sets, results, conditionCount: total };
+}
+
+/**
+ * The same set given twice would judge every condition twice and count each finding twice:
+ * refused, naming both references, whether given by id, by path or by two paths to one file.
+ */
+function refuseRepeatedSets<T extends { set: ResolvedCriteriaSet }>(loaded: T[], refs: readonly string[]): T[] {
+  const seen = new Map<string, number>();
+  const issues: InputIssue[] = [];
+  loaded.forEach((l, i) => {
+    const key = l.set.id.toLowerCase();
+    const first = seen.get(key);
+    if (first === undefined) seen.set(key, i);
+    else {
+      issues.push({
+        file: refs[i] ?? l.set.id,
+        field: '--criteria',
+        message: `criteria set '${l.set.id}' is given twice (as '${refs[first]}' and '${refs[i]}'): every finding would be counted twice; give it once`,
+        code: 'repeated_set',
+      });
+    }
+  });
+  if (issues.length > 0) throw new InputError(issues);
+  return loaded;
 }

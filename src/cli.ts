@@ -55,13 +55,13 @@ export async function main(argv: string[], io: Io = defaultIo()): Promise<number
     .version(toolVersion())
     .exitOverride()
     .configureOutput({ writeOut: (s) => io.out(visibleLines(s.trimEnd())), writeErr: (s) => io.err(visibleLines(s.trimEnd())) })
-    .showHelpAfterError();
+    .showHelpAfterError('(modalgate --help for the commands)');
 
   program
     .command('check')
     .description('identify the modes, evaluate the criteria and write the review document')
     .argument('<model>', 'model file (modalgate-model/1, YAML or JSON)')
-    .option('--criteria <set>', 'criteria file or shipped set id (repeatable; default: mil-f-8785c)', collect, [])
+    .option('--criteria <set>', `criteria file or shipped set id, any case (repeatable; default: ${DEFAULT_CRITERIA})`, collect)
     .option('--html <file>', 'write the HTML review document')
     .option('--pdf <file>', 'write the PDF review document (needs Chromium)')
     .option('--json <file>', 'write results JSON (modalgate-results/1)')
@@ -71,7 +71,7 @@ export async function main(argv: string[], io: Io = defaultIo()): Promise<number
     .addOption(new Option('--fail-on <verdict>', 'lowest verdict that makes the exit code 1').choices(['fail', 'marginal']).default('fail'))
     .addOption(new Option('--paper <size>', 'PDF paper size').choices(['A4', 'Letter']).default('A4'))
     .option('--browser <path>', 'Chromium or Chrome executable for the PDF')
-    .option('--trust-folder <folder>', 'a folder besides the model\'s own whose files the model may name (repeatable)', collect, [])
+    .option('--trust-folder <folder>', 'a folder besides the model\'s own whose files the model may name (repeatable)', collect)
     .addOption(new Option('--detail <which>', 'per-condition detail: all, issues (conditions with a fail, marginal or not-evaluated finding) or none').choices(['all', 'issues', 'none']))
     .action(async (modelPath: string, opts: CheckCommandOptions) => {
       exitCode = await checkCommand(modelPath, opts, argv, io);
@@ -82,15 +82,15 @@ export async function main(argv: string[], io: Io = defaultIo()): Promise<number
     .description('identify the modes and print their figures (no criteria)')
     .argument('<model>', 'model file (modalgate-model/1, YAML or JSON)')
     .option('--json <file>', 'write results JSON (modes only, no findings)')
-    .option('--trust-folder <folder>', 'a folder besides the model\'s own whose files the model may name (repeatable)', collect, [])
+    .option('--trust-folder <folder>', 'a folder besides the model\'s own whose files the model may name (repeatable)', collect)
     .option('--mode-shapes', `write each mode's shape in the results JSON of a sweep too (left out above ${MODE_SHAPES_UP_TO} conditions)`)
-    .action(async (modelPath: string, opts: { json?: string; trustFolder: string[]; modeShapes?: boolean }) => {
+    .action(async (modelPath: string, opts: { json?: string; trustFolder?: string[]; modeShapes?: boolean }) => {
       const outputs: OutputPath[] = opts.json !== undefined ? [{ option: '--json', path: opts.json }] : [];
       await checkOutputPaths(outputs);
       const outcome = await runCheck({
         model: modelPath,
         criteria: [],
-        trustedFolders: opts.trustFolder,
+        trustedFolders: opts.trustFolder ?? [],
         ...runContext(argv, io),
         ...(opts.modeShapes ? { modeShapes: true } : {}),
         onStart: (head) => checkOutputsAreNotInputs(outputs, head.inputs),
@@ -118,6 +118,12 @@ export async function main(argv: string[], io: Io = defaultIo()): Promise<number
       io.out(visible(`${file}: valid; set ${set.id} (${set.chain.join(' > ')}), ${set.criteria.length} criteria, ${set.dropped.length} dropped, ${files.length} file(s)`));
     });
 
+  // A usage error prints the error and the command's one usage line, not the whole help.
+  for (const command of [...program.commands, ...criteria.commands]) {
+    const name = command.parent && command.parent !== program ? `${command.parent.name()} ${command.name()}` : command.name();
+    command.showHelpAfterError(`usage: modalgate ${name} ${command.usage()} (--help for every option)`);
+  }
+
   try {
     await program.parseAsync(argv, { from: 'user' });
     return exitCode;
@@ -133,7 +139,8 @@ const LARGE_RUN = 50;
 const SMALL_SWEEP = 8;
 
 interface CheckCommandOptions {
-  criteria: string[];
+  /** absent when not given: the default set is used and said */
+  criteria?: string[];
   html?: string;
   pdf?: string;
   json?: string;
@@ -144,12 +151,13 @@ interface CheckCommandOptions {
   paper: 'A4' | 'Letter';
   browser?: string;
   detail?: 'all' | 'issues' | 'none';
-  trustFolder: string[];
+  trustFolder?: string[];
 }
 
 async function checkCommand(modelPath: string, opts: CheckCommandOptions, argv: string[], io: Io): Promise<number> {
-  const criteria = opts.criteria.length > 0 ? opts.criteria : [DEFAULT_CRITERIA];
-  if (opts.criteria.length === 0) io.out(`no --criteria given: using the shipped set ${DEFAULT_CRITERIA}`);
+  const given = opts.criteria ?? [];
+  const criteria = given.length > 0 ? given : [DEFAULT_CRITERIA];
+  if (given.length === 0) io.out(`no --criteria given: using the shipped set ${DEFAULT_CRITERIA}`);
   // Read the baseline and check the outputs (the default report too) before any work, so that
   // a bad baseline or an output that cannot be written is reported at once; once the model
   // and criteria are read, no output may be one of them.
@@ -171,7 +179,7 @@ async function checkCommand(modelPath: string, opts: CheckCommandOptions, argv: 
     const outcome = await runCheck({
       model: modelPath,
       criteria,
-      trustedFolders: opts.trustFolder,
+      trustedFolders: opts.trustFolder ?? [],
       ...runContext(argv, io),
       ...(opts.modeShapes ? { modeShapes: true } : {}),
       onProgress: progress.onProgress,
@@ -326,8 +334,8 @@ function defaultHtmlPath(modelPath: string): string {
   return path.join(parsed.dir, `${parsed.name}.review.html`);
 }
 
-function collect(value: string, previous: string[]): string[] {
-  return [...previous, value];
+function collect(value: string, previous: string[] | undefined): string[] {
+  return [...(previous ?? []), value];
 }
 
 function reportError(err: unknown, io: Io): number {

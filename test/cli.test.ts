@@ -275,3 +275,47 @@ describe('the installed command', () => {
     for (const command of ['check', 'modes', 'criteria']) expect(text).toContain(command);
   });
 });
+
+describe('command line words and usage', () => {
+  it('a usage error prints the error and one usage line, not the whole help (exit 2)', async () => {
+    const r = await run('check', sample, '--bogus');
+    expect(r.code).toBe(2);
+    expect(r.err).toContain("unknown option '--bogus'");
+    expect(r.err).toContain('usage: modalgate check [options] <model>');
+    expect(r.err).not.toContain('--baseline');
+    expect(r.err.split('\n').length).toBeLessThanOrEqual(3);
+  });
+
+  it('the help gives one default for --criteria', async () => {
+    const r = await run('check', '--help');
+    const help = `${r.out}\n${r.err}`;
+    expect(help).toContain('default: mil-f-8785c');
+    expect(help).not.toContain('default: []');
+  });
+
+  it('set ids are matched whatever their case; a close miss gets a "did you mean" and templates are named as such', async () => {
+    const dir = scratch();
+    const ok = await run('check', sample, '--criteria', 'MIL-F-8785C', '--json', path.join(dir, 'r.json'));
+    expect(ok.code).toBe(1);
+    const miss = await run('check', sample, '--criteria', 'mil-f-8875c', '--json', path.join(dir, 'r2.json'));
+    expect(miss.code).toBe(2);
+    expect(miss.err).toContain("did you mean 'mil-f-8785c'?");
+    expect(miss.err).toContain('template to copy: criteria/programme-template.yaml');
+    expect(miss.err).not.toMatch(/shipped sets: [^;)]*programme-template/);
+  });
+
+  it('the same set given twice is refused, naming both references', async () => {
+    const dir = scratch();
+    const r = await run('check', sample, '--criteria', 'mil-f-8785c', '--criteria', path.join(root, 'criteria/mil-f-8785c.yaml'), '--json', path.join(dir, 'r.json'));
+    expect(r.code).toBe(2);
+    expect(r.err).toContain("criteria set 'mil-f-8785c' is given twice");
+    expect(existsSync(path.join(dir, 'r.json'))).toBe(false);
+  });
+
+  it('no internal snake_case name in the terminal tables', async () => {
+    const dir = scratch();
+    const r = await run('check', sample, '--json', path.join(dir, 'r.json'));
+    const tables = r.out.split('\n').filter((l) => !l.includes('note:') && !l.startsWith('wrote'));
+    expect(tables.join('\n')).not.toMatch(/\b[a-z]+_[a-z]+(_[a-z]+)*\b/);
+  });
+});

@@ -3,6 +3,7 @@
  * ResolvedCriteriaSet: inherit, override by criterion id, drop with a reason, add. Pure: the
  * files are read and validated in src/load/criteria-file.ts.
  */
+import { didYouMean } from '../did-you-mean.js';
 import { InputError, describeFound, formatPath, type InputIssue } from '../errors.js';
 import {
   PROGRAMME_VALUE, type BoundInput, type CriterionInput, type EvidenceEntryInput, type OverrideInput,
@@ -92,7 +93,7 @@ export function resolveCriteriaChain(files: ParsedCriteriaFile[]): ResolvedCrite
       const at: Origin = { file, path: ['overrides', j, 'id'] };
       const target = working.get(override.id);
       if (!target) {
-        issues.push(issueAt(at, `no criterion '${override.id}' in the sets this file extends`, 'unknown_id', override.id));
+        issues.push(issueAt(at, `no criterion '${override.id}' in the sets this file extends${didYouMean(override.id, [...working.keys()])}`, 'unknown_id', override.id));
       } else if (droppedHere.has(override.id)) {
         issues.push(issueAt(at, `criterion '${override.id}' is both overridden and dropped in this file`, 'override_and_drop'));
       } else {
@@ -101,7 +102,7 @@ export function resolveCriteriaChain(files: ParsedCriteriaFile[]): ResolvedCrite
     });
     (data.drop ?? []).forEach((drop, j) => {
       if (!working.has(drop.id)) {
-        issues.push(issueAt({ file, path: ['drop', j, 'id'] }, `no criterion '${drop.id}' in the sets this file extends`, 'unknown_id', drop.id));
+        issues.push(issueAt({ file, path: ['drop', j, 'id'] }, `no criterion '${drop.id}' in the sets this file extends${didYouMean(drop.id, [...working.keys()])}`, 'unknown_id', drop.id));
         return;
       }
       working.delete(drop.id);

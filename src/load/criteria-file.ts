@@ -3,6 +3,7 @@
  * Follows the `extends` chain, validates every file (all problems at once, with file, line
  * and column), then hands the chain, root first, to the pure resolver.
  */
+import { didYouMean } from '../did-you-mean.js';
 import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -90,7 +91,7 @@ function unknownExtends(parent: string, extendsAt: Place): InputIssue {
     ...extendsAt,
     field: 'extends',
     message: `no criteria file or shipped set '${parent}'`,
-    expected: `a path relative to this file, or one of ${shippedIds().join(', ')}`,
+    expected: `a path relative to this file, or one of ${shippedIds().join(', ')}${didYouMean(parent, allShippedIds())}`,
     found: JSON.stringify(parent),
     code: 'unknown_extends',
   };
@@ -128,7 +129,9 @@ interface Located {
 function locateRef(ref: string, from: Located | undefined): Located | undefined {
   const looksLikePath = /[\\/]/.test(ref) || /\.(ya?ml|json)$/i.test(ref);
   if (!looksLikePath) {
-    const shipped = path.join(SHIPPED_CRITERIA_DIR, `${ref}.yaml`);
+    // set ids are matched without regard to case: MIL-F-8785C names the shipped mil-f-8785c
+    const id = allShippedIds().find((k) => k.toLowerCase() === ref.toLowerCase()) ?? ref;
+    const shipped = path.join(SHIPPED_CRITERIA_DIR, `${id}.yaml`);
     if (existsSync(shipped)) return { shown: shownPath(shipped), absolute: shipped };
     if (from) return undefined;
   }
@@ -142,7 +145,8 @@ function shownPath(absolute: string): string {
   return relative !== '' && !relative.startsWith('..') && !path.isAbsolute(relative) ? relative : absolute;
 }
 
-function shippedIds(): string[] {
+/** Every criteria file in the shipped folder, templates included. */
+function allShippedIds(): string[] {
   try {
     return readdirSync(SHIPPED_CRITERIA_DIR)
       .filter((f) => f.endsWith('.yaml'))
@@ -153,13 +157,28 @@ function shippedIds(): string[] {
   }
 }
 
+/** A shipped file named `*-template` is an example for a programme to copy, not a set to check against. */
+const isTemplate = (id: string) => id.endsWith('-template');
+
+/** The shipped sets, templates left out (they are named apart, see `shippedListText`). */
+export function shippedIds(): string[] {
+  return allShippedIds().filter((id) => !isTemplate(id));
+}
+
+/** `mil-f-8785c, civil-dynamic-stability; template to copy: criteria/programme-template.yaml` */
+export function shippedListText(): string {
+  const templates = allShippedIds().filter(isTemplate);
+  return `${shippedIds().join(', ')}${templates.length > 0 ? `; template to copy: ${templates.map((t) => `criteria/${t}.yaml`).join(', ')}` : ''}`;
+}
+
 async function readBytes(absolute: string, shown: string, referencedAt: Place | undefined): Promise<Buffer> {
   try {
     return await readRegularFile(absolute);
   } catch (err) {
     if (!(err instanceof UnreadableFile)) throw err;
     const reason = err.reason === 'file not found' ? 'no such file' : `the file ${err.reason}`;
-    const shipped = referencedAt === undefined ? ` (shipped sets: ${shippedIds().join(', ')})` : '';
+    const bare = !/[\\/]/.test(shown) && !/\.(ya?ml|json)$/i.test(shown);
+    const shipped = referencedAt === undefined ? `${bare ? didYouMean(shown, allShippedIds()) : ''} (shipped sets: ${shippedListText()})` : '';
     throw new InputError([
       { ...(referencedAt ?? { file: shown }), field: referencedAt ? 'extends' : '', message: `${reason}: ${shown}${shipped}`, code: 'unreadable' },
     ]);

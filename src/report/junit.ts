@@ -4,6 +4,7 @@
  * that could not be evaluated is <skipped> with its reason, so it is neither hidden as a pass
  * nor counted as a failure. Times are 0: the figures are computed, not timed tests.
  */
+import { QUANTITY_TEXT } from './labels.js';
 import { EVIDENCE_MEANING } from './evidence-text.js';
 import type { Bound, ConditionResult, Finding, LevelBounds, Results } from '../types.js';
 import { formatSig } from './format-number.js';
@@ -81,7 +82,7 @@ function outcomeOf(f: Finding, options: JunitOptions): Outcome {
 }
 
 function renderCase(classname: string, c: ConditionResult, f: Finding, outcome: Outcome): string {
-  const open = `    <testcase ${attrs({ classname, name: `${f.criterion} ${f.quantity}`, time: 0 })}`;
+  const open = `    <testcase ${attrs({ classname, name: `${f.criterion} ${QUANTITY_TEXT[f.quantity]}`, time: 0 })}`;
   const body: string[] = [];
   if (outcome === 'failure') {
     body.push(`      <failure ${attrs({ message: verdictMessage(c, f), type: f.verdict })}>${text(detail(f))}</failure>`);

@@ -57,7 +57,7 @@ export const QUANTITY_TEXT: Record<Quantity, string> = {
   damping_ratio: 'damping ratio',
   natural_frequency: 'natural frequency',
   cap: 'CAP',
-  damping_frequency_product: 'zeta*omega_n',
+  damping_frequency_product: 'zeta*wn',
   time_to_double: 'time to double',
   time_constant: 'time constant',
   time_to_bank: 'time to bank',

@@ -105,3 +105,20 @@ export function dateText(iso: string): string {
   const pad = (n: number) => String(n).padStart(2, '0');
   return `${d.getUTCFullYear()}-${pad(d.getUTCMonth() + 1)}-${pad(d.getUTCDate())} ${pad(d.getUTCHours())}:${pad(d.getUTCMinutes())} UTC`;
 }
+
+/**
+ * The ASCII math of method notes and reasons (`omega_sp^2 / (n/alpha)`, `zeta omega_n`,
+ * `|phi/beta|`) in the document's own symbols, so that no underscore name reaches the reader.
+ */
+export function mathText(text: string): string {
+  return text
+    .replace(/omega_sp/g, '\u03c9sp')
+    .replace(/omega_n/g, '\u03c9n')
+    .replace(/omega_d/g, '\u03c9d')
+    .replace(/\bzeta\b/g, '\u03b6')
+    .replace(/\bphi\b/g, '\u03c6')
+    .replace(/\bbeta\b/g, '\u03b2')
+    .replace(/\balpha\b/g, '\u03b1')
+    .replace(/\btheta0\b/g, '\u03b80')
+    .replace(/\^2\b/g, '\u00b2');
+}

@@ -24,7 +24,7 @@ import type {
   ChartView, ConditionView, CriteriaSetView, EvidenceSummaryView, FindingRow, ModeRow, OverviewView, ReportView, SourceView, VerdictTally,
 } from './report-view.js';
 import { VERDICT_ORDER, verdictMark, worstVerdict } from './verdict-marks.js';
-import { boundText, dateText, eigenvalueText, levelBoundsText, lengthText, NONE, sig, signedSig, unitText, withUnit } from './view-format.js';
+import { boundText, dateText, eigenvalueText, levelBoundsText, lengthText, mathText, NONE, sig, signedSig, unitText, withUnit } from './view-format.js';
 import { isRealMode, modeStability, type Stability } from '../modes/stability.js';
 import { defaultsBehind } from './finding-defaults.js';
 import { isSingleRequirement, levelReachedWords, modeLevel, modeLevelWords } from './mode-levels.js';
@@ -112,8 +112,8 @@ function findingRow(f: Finding, c: ConditionResult, showSet: boolean): FindingRo
     evidence: f.evidence.class,
     evidenceSources: f.evidence.sources.map((id) => ({ id, anchor: sourceAnchor(id) })),
     // a pass says no more than its level column; any other verdict says why
-    reason: f.verdict === 'pass' ? '' : f.reason,
-    method: f.method ?? null,
+    reason: f.verdict === 'pass' ? '' : mathText(f.reason),
+    method: f.method === undefined ? null : mathText(f.method),
   };
 }
 
@@ -144,6 +144,12 @@ function derivedWarnings(c: ConditionResult): string[] {
   return out;
 }
 
+/** The coupling figure with what it means: the largest relative shift of a root when the cross terms are removed. */
+function couplingText(coupling: number): string {
+  if (coupling === 0) return '0: uncoupled (no root moves when the longitudinal/lateral cross terms are removed)';
+  return `${sig(coupling, 2)}: the largest relative shift of a root when the longitudinal/lateral cross terms are removed`;
+}
+
 function subsystemsText(c: ConditionResult): string {
   const s = c.subsystems;
   const parts: string[] = [];
@@ -166,7 +172,7 @@ function conditionView(c: ConditionResult, anchor: string, withCharts: boolean, 
     requiredLevelFrom: REQUIRED_FROM[c.requiredLevelFrom ?? 'none'],
     form: FORM_LABEL[c.form],
     subsystems: subsystemsText(c),
-    coupling: sig(c.coupling, 2),
+    coupling: couplingText(c.coupling),
     mark: verdictMark(conditionVerdict(c)),
     tally: tallyOf(countVerdicts(c.findings)),
     modes: c.modes.map((m) => modeRow(m, c)),

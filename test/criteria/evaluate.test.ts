@@ -138,7 +138,7 @@ describe('evaluateCondition: missing modes and figures are not evaluated, with t
       {
         criterion: 'roll-spiral-coupling',
         set: 'mil-f-8785c',
-        title: 'Coupled roll-spiral oscillation, minimum zeta omega_n, Categories B and C',
+        title: 'Coupled roll-spiral oscillation, minimum ζ·ωn, Categories B and C',
         source: 'MIL-F-8785C 3.3.1.4',
         reason: 'no coupled roll-spiral oscillation identified in this condition',
       },

@@ -56,7 +56,7 @@ describe('loadCriteriaSet: bad files (messages pinned)', () => {
     [
       'unknown override and drop ids (both reported)',
       `${bad}/unknown-override.yaml`,
-      `${bad}/unknown-override.yaml:6:9: overrides[0].id: no criterion 'short-period-damping-cat-d' in the sets this file extends (found "short-period-damping-cat-d") [unknown_id]\n` +
+      `${bad}/unknown-override.yaml:6:9: overrides[0].id: no criterion 'short-period-damping-cat-d' in the sets this file extends (did you mean 'short-period-damping-cat-b'?) (found "short-period-damping-cat-d") [unknown_id]\n` +
         `${bad}/unknown-override.yaml:10:9: drop[0].id: no criterion 'spiral-stability' in the sets this file extends (found "spiral-stability") [unknown_id]`,
     ],
     [
@@ -105,7 +105,7 @@ describe('loadCriteriaSet: bad files (messages pinned)', () => {
     [
       'no such file',
       `${bad}/nowhere.yaml`,
-      `${bad}/nowhere.yaml: no such file: ${bad}/nowhere.yaml (shipped sets: civil-dynamic-stability, mil-f-8785c, programme-template) [unreadable]`,
+      `${bad}/nowhere.yaml: no such file: ${bad}/nowhere.yaml (shipped sets: civil-dynamic-stability, mil-f-8785c; template to copy: criteria/programme-template.yaml) [unreadable]`,
     ],
   ];
   it.each(cases)('%s', async (_name, ref, message) => {

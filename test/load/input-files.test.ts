@@ -126,6 +126,6 @@ describe('only regular files, up to the size limit, are read', () => {
   it('a criteria file that is a device or a FIFO is refused the same way', async () => {
     const fifo = join(dir, 'criteria.yaml');
     expect(spawnSync('mkfifo', [fifo]).status).toBe(0);
-    expect(await messageOf(loadCriteriaSet(fifo))).toBe(`${fifo}: the file is not a regular file (a FIFO, socket or device); only regular files are read: ${fifo} (shipped sets: civil-dynamic-stability, mil-f-8785c, programme-template) [unreadable]`);
+    expect(await messageOf(loadCriteriaSet(fifo))).toBe(`${fifo}: the file is not a regular file (a FIFO, socket or device); only regular files are read: ${fifo} (shipped sets: civil-dynamic-stability, mil-f-8785c; template to copy: criteria/programme-template.yaml) [unreadable]`);
   }, 5_000);
 });

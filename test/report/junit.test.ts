@@ -54,14 +54,14 @@ describe('renderJunit: counts', () => {
     for (const t of elementsNamed(root, 'testcase')) expect(t.attributes.time).toBe('0');
   });
 
-  it('names test cases <criterion id> <quantity>, classname <aircraft>.<condition id>', () => {
+  it('names test cases <criterion id> <quantity in words, never an internal name>, classname <aircraft>.<condition id>', () => {
     const cases = elementsNamed(parseXml(renderJunit(mixed, { failOn: 'fail' })), 'testcase');
     expect(cases.map((c) => `${c.attributes.classname} | ${c.attributes.name}`)).toEqual([
-      'Test aircraft.CR-1 | sp-zeta damping_ratio',
-      'Test aircraft.CR-1 | sp-2 damping_ratio',
-      'Test aircraft.CR-1 | sp-3 damping_ratio',
-      'Test aircraft.PA-1 | dr-zeta damping_ratio',
-      'Test aircraft.PA-1 | dr-wn damping_ratio',
+      'Test aircraft.CR-1 | sp-zeta damping ratio',
+      'Test aircraft.CR-1 | sp-2 damping ratio',
+      'Test aircraft.CR-1 | sp-3 damping ratio',
+      'Test aircraft.PA-1 | dr-zeta damping ratio',
+      'Test aircraft.PA-1 | dr-wn damping ratio',
     ]);
   });
 
@@ -80,7 +80,7 @@ describe('renderJunit: counts', () => {
 
   it('shows a marginal finding in the log when it does not fail the build', () => {
     const root = parseXml(renderJunit(mixed, { failOn: 'fail' }));
-    const marginal = elementsNamed(root, 'testcase').find((c) => c.attributes.name === 'sp-2 damping_ratio');
+    const marginal = elementsNamed(root, 'testcase').find((c) => c.attributes.name === 'sp-2 damping ratio');
     expect(marginal?.children.map((c) => c.name)).toEqual(['system-out']);
     expect(marginal?.children[0]?.text).toMatch(/^marginal: value 0\.3100 .*\(not a failure unless failing on marginal\)$/);
   });
@@ -110,7 +110,7 @@ describe('renderJunit: escaping', () => {
       field: 'criterion id in test name',
       make: () => results({ conditions: [condition({ id: 'c', findings: [sp({ criterion: nasty, verdict: 'pass' })] })] }),
       read: (r) => elementsNamed(r, 'testcase')[0]?.attributes.name,
-      expected: `${nasty} damping_ratio`,
+      expected: `${nasty} damping ratio`,
     },
     {
       field: 'unit in the failure message',
