@@ -169,9 +169,30 @@ describe('values no retrievable text gives stay memory, and are listed', () => {
     expect([c.evidence['1'].class, c.evidence['2'].class, c.evidence['3'].class]).toEqual(['memory', 'memory', 'memory']);
   });
 
+  it('roll performance: Class III Table IXf read in notes quoting the document, Classes I, II and IV recalled (3.3.4)', () => {
+    // Table IXf as quoted in roll-rate-thesis-notes (3.3.4.2, p. 30), time to a 30 deg bank change, the strictest
+    // speed range kept: Level 1 A 1.5, B 2.0, C 2.5 s; Level 2 A 2.0, B 3.3, C 4.0 s; Level 3 A 3.0, B 5.0, C 6.0 s
+    const rows = mil.criteria.filter((c) => c.quantity === 'time_to_bank');
+    expect(rows.length).toBeGreaterThan(0);
+    for (const c of rows) {
+      const classes = [c.evidence['1'].class, c.evidence['2'].class, c.evidence['3'].class];
+      if (c.applies.classes?.includes('III')) {
+        expect(c.applies.classes, c.id).toEqual(['III']);
+        expect(classes, c.id).toEqual(['secondary', 'secondary', 'secondary']);
+        for (const k of ['1', '2', '3'] as const) expect(c.evidence[k].cites.map((x) => x.source)).toEqual(['roll-rate-thesis-notes']);
+      } else {
+        expect(classes, c.id).toEqual(['memory', 'memory', 'memory']);
+      }
+    }
+    const iii = (cat: string) => rows.find((c) => c.applies.classes?.includes('III') && c.applies.categories?.includes(cat as 'A'))!.levels;
+    expect(iii('A')).toEqual({ '1': { max: 1.5 }, '2': { max: 2 }, '3': { max: 3 } });
+    expect(iii('B')).toEqual({ '1': { max: 2 }, '2': { max: 3.3 }, '3': { max: 5 } });
+    expect(iii('C')).toEqual({ '1': { max: 2.5 }, '2': { max: 4 }, '3': { max: 6 } });
+  });
+
   it('the set notes list them', () => {
     const notes = mil.notes.join('\n');
-    for (const words of [/short-period Level 3 minimum\s+damping \(0\.15\)/, /Class IV Category A Dutch-roll damping in CO and GA \(0\.4\)/, /\|phi\/beta\| rise/, /coupled\s+roll-spiral limits/]) {
+    for (const words of [/short-period Level 3 minimum\s+damping \(0\.15\)/, /Class IV Category A Dutch-roll damping in CO and GA \(0\.4\)/, /\|phi\/beta\| rise/, /coupled\s+roll-spiral limits/, /roll performance of Classes I, II\s+and IV/]) {
       expect(notes).toMatch(words);
     }
   });
