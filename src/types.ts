@@ -148,6 +148,8 @@ export interface Mode {
   referenceState: string;
   /** per state, largest participation first */
   shape: StateShare[];
+  /** present when rounding leaves the roots' figures untrustworthy: why (its findings are not evaluated) */
+  inaccurate?: string;
 }
 
 /**

@@ -93,7 +93,11 @@ export function evaluateCondition(input: {
     if (modes.length > 1) {
       warnings.push(`${modes.length} modes identified as ${criterion.mode}: criterion ${criterion.id} is evaluated for each`);
     }
-    for (const mode of modes) findings.push(evaluateOne({ criterion, mode, condition, analysis, aircraftClass, requiredLevel, set, responses }));
+    for (const mode of modes) {
+      // figures that rounding has made meaningless get no verdict, whatever their value
+      if (mode.inaccurate !== undefined) findings.push(notEvaluatedHere(criterion, requiredLevel, mode.inaccurate));
+      else findings.push(evaluateOne({ criterion, mode, condition, analysis, aircraftClass, requiredLevel, set, responses }));
+    }
   }
   warnings.push(...uncoveredModes(set, analysis, aircraftClass, category, condition.phase));
   return { category, requiredLevel, requiredLevelFrom, findings, notApplicable, warnings: warnings.map(flat) };

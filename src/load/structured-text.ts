@@ -63,11 +63,11 @@ function parseWithPositions(text: string, file: string) {
       file,
       ...(pos ? { line: pos.line, column: pos.col } : {}),
       field: '',
-      message: `not valid YAML/JSON: ${e.message.split('\n')[0]}`,
+      message: /call stack/i.test(e.message) ? NESTED_TOO_DEEPLY : `not valid YAML/JSON: ${e.message.split('\n')[0]}`,
       code: 'syntax',
     };
   });
-  const value: unknown = errors.length === 0 ? doc.toJS({ maxAliasCount: 1000 }) : undefined;
+  const value: unknown = errors.length === 0 ? toValue(doc, file, lineCounter) : undefined;
   const locate = (path: readonly PropertyKey[]) => {
     let node: unknown = doc.contents;
     let best: Node | undefined = isNode(node) ? node : undefined;
@@ -134,6 +134,44 @@ function jsonSyntaxIssue(message: string, doc: ReturnType<typeof parseWithPositi
     return { file, line: pos.line, column: pos.col, field: '', message: `not valid JSON: ${word} is not a JSON value`, found: word, code: 'syntax' };
   }
   return { file, field: '', message: `not valid JSON: ${message}`, code: 'syntax' };
+}
+
+const NESTED_TOO_DEEPLY = 'lists or mappings are nested too deeply to read (a model or criteria file needs fewer than 20 levels)';
+/** Alias expansions allowed while building the value: a real file has a handful; an "alias bomb" has billions. */
+const MAX_ALIAS_COUNT = 1000;
+
+/**
+ * The document's value. A document whose aliases expand without bound (an "alias bomb") or that
+ * nests deeper than the stack allows is bad input, reported at its first alias or at its start.
+ */
+function toValue(doc: ReturnType<typeof parseDocument>, file: string, lineCounter: LineCounter): unknown {
+  try {
+    return doc.toJS({ maxAliasCount: MAX_ALIAS_COUNT });
+  } catch (err) {
+    const message = String((err as Error)?.message ?? err);
+    if (/alias/i.test(message)) {
+      let at: { line: number; col: number } | undefined;
+      visit(doc, {
+        Alias(_, node) {
+          if (node.range) at = lineCounter.linePos(node.range[0]);
+          return visit.BREAK;
+        },
+      });
+      throw new InputError([
+        {
+          file,
+          ...(at ? { line: at.line, column: at.col } : {}),
+          field: '',
+          message: `the aliases (*name) expand to too many values (more than ${MAX_ALIAS_COUNT}); write the values out, or use fewer aliases of aliases`,
+          expected: `at most ${MAX_ALIAS_COUNT} alias expansions`,
+          found: 'more',
+          code: 'alias_limit',
+        },
+      ]);
+    }
+    if (err instanceof RangeError) throw new InputError([{ file, line: 1, column: 1, field: '', message: NESTED_TOO_DEEPLY, code: 'syntax' }]);
+    throw err;
+  }
 }
 
 function isNode(x: unknown): x is Node {

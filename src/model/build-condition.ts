@@ -11,6 +11,7 @@ import { buildNondimensional } from './build-nondimensional.js';
 import { buildControls } from './cockpit-controls.js';
 import { stateSpaceToSI } from './convert-to-si.js';
 import { buildLateralPart, buildLongitudinalPart, type Part } from './derivative-parts.js';
+import { nonFiniteEntry } from './finite-entries.js';
 import type { Built, ModelProblem } from './problem.js';
 import { blockDiagonal, buildStateSpace } from './state-space.js';
 
@@ -120,6 +121,9 @@ export function buildCondition(written: WrittenCondition, settings: BuildSetting
     system = si.system;
     notes.push(...si.notes);
   }
+
+  const broken = nonFiniteEntry(system, written, path);
+  if (broken) return { ok: false, problems: [broken] };
 
   const { controls, problems: controlProblems } = buildControls(written.controls, system, [...path, 'controls']);
   if (controlProblems.length > 0) return { ok: false, problems: controlProblems };

@@ -76,7 +76,7 @@ export function frequencyRank(frequencies: readonly number[], p: number, axisWor
 export function bankToSideslip(root: Root, airspeed: number): string {
   const size = (state: string): number | null => {
     const k = root.states.indexOf(state);
-    return k < 0 ? null : Math.sqrt(root.vector.re[k]! ** 2 + root.vector.im[k]! ** 2);
+    return k < 0 ? null : Math.hypot(root.vector.re[k]!, root.vector.im[k]!);
   };
   const phi = size('phi');
   const beta = size('beta') ?? (size('v') === null ? null : size('v')! / airspeed);
@@ -134,7 +134,7 @@ export function groupSummary(root: Root): string {
 }
 
 function magnitude(z: Complex): number {
-  return Math.sqrt(z.re ** 2 + z.im ** 2);
+  return Math.hypot(z.re, z.im);
 }
 
 function ordinal(k: number): string {

@@ -24,7 +24,7 @@ import {
   rootSummary,
 } from './basis-text.js';
 import { flat } from '../flat-string.js';
-import { modalFigures } from './modal-figures.js';
+import { geometricMean, modalFigures } from './modal-figures.js';
 import { modeShape } from './mode-shape.js';
 import { LATERAL_TEMPLATES, LONGITUDINAL_TEMPLATES, type ModeTemplate } from './mode-templates.js';
 import { leastStable, type Root } from './roots.js';
@@ -226,7 +226,12 @@ function buildMode(kind: ModeKind, roots: readonly Root[], basis: string, ambigu
     ambiguous,
     referenceState,
     shape,
+    ...(kind === 'kinematic' || kind === 'other' ? {} : optional('inaccurate', accuracyLost(roots))),
   };
+}
+
+function optional<K extends string>(key: K, value: string | undefined): { [P in K]?: string } {
+  return (value === undefined ? {} : { [key]: value }) as { [P in K]?: string };
 }
 
 function dominantGroup(root: Root): StateGroup {
@@ -237,18 +242,39 @@ function dominantGroup(root: Root): StateGroup {
   return best;
 }
 
+/**
+ * A root is zero when it is within 1e-9 of the spectral radius of zero, or within its own
+ * rounding error bound: relative to the matrix, never in absolute terms, so that a model in
+ * other time units (or scaled by 1e-300) has the same zero roots.
+ */
 function isNumericalZero(root: Root, all: readonly Root[]): boolean {
   let radius = 0;
   for (const r of all) radius = Math.max(radius, magnitude(r.value));
-  return magnitude(root.value) <= 1e-9 * Math.max(radius, 1);
+  const size = magnitude(root.value);
+  return size <= 1e-9 * radius || size <= root.errorBound;
+}
+
+/** Relative rounding error above which a root's figures are not trusted for a verdict. */
+const ACCURACY_LIMIT = 1e-3;
+
+/** Why the figures of a mode's roots cannot be trusted, or undefined when they can. */
+function accuracyLost(roots: readonly Root[]): string | undefined {
+  for (const root of roots) {
+    const size = magnitude(root.value);
+    if (!(root.errorBound <= ACCURACY_LIMIT * size)) {
+      const relative = size > 0 ? root.errorBound / size : Infinity;
+      return `accuracy lost: the root ${formatRoot(root.value)} is known only to a relative error of ${formatNumber(relative)} (the model's entries span too wide a range for double precision); not evaluated`;
+    }
+  }
+  return undefined;
 }
 
 /** [rad/s] |lambda| of a pair, sqrt|l1 l2| of two real roots, |lambda| of one real root */
 function characteristicFrequency(roots: readonly Root[]): number {
-  if (roots.length === 2) return Math.sqrt(Math.abs(roots[0]!.value.re * roots[1]!.value.re));
+  if (roots.length === 2) return geometricMean(roots[0]!.value.re, roots[1]!.value.re);
   return magnitude(roots[0]!.value);
 }
 
 function magnitude(z: Complex): number {
-  return Math.sqrt(z.re ** 2 + z.im ** 2);
+  return Math.hypot(z.re, z.im);
 }

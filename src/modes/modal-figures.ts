@@ -36,7 +36,7 @@ export function modalFigures(eigenvalues: readonly Complex[]): ModalFigures {
 }
 
 function oscillatoryFigures(root: Complex): ModalFigures {
-  const omegaN = Math.sqrt(root.re ** 2 + root.im ** 2);
+  const omegaN = Math.hypot(root.re, root.im); // no underflow or overflow of the squares
   const omegaD = Math.abs(root.im);
   const sigma = root.re;
   return {
@@ -65,12 +65,14 @@ function realRootFigures(lambda: number): ModalFigures {
 }
 
 function splitPairFigures(l1: number, l2: number): ModalFigures {
-  const product = l1 * l2;
+  const sameSign = (l1 < 0 && l2 < 0) || (l1 > 0 && l2 > 0);
+  const geometric = geometricMean(l1, l2);
+  const sum = l1 + l2;
   const leastStable = Math.max(l1, l2);
   const converges = l1 < 0 && l2 < 0;
   return {
-    naturalFrequency: product > 0 ? Math.sqrt(product) : null,
-    dampingRatio: converges ? -(l1 + l2) / (2 * Math.sqrt(product)) : null,
+    naturalFrequency: sameSign ? geometric : null,
+    dampingRatio: converges ? -(Number.isFinite(sum) ? sum : 2 * (l1 / 2 + l2 / 2)) / (2 * geometric) : null,
     dampedFrequency: null,
     period: null,
     timeConstant: leastStable === 0 ? null : -1 / leastStable,
@@ -78,4 +80,14 @@ function splitPairFigures(l1: number, l2: number): ModalFigures {
     timeToDouble: leastStable > 0 ? Math.LN2 / leastStable : null,
     cyclesToHalf: null,
   };
+}
+
+/**
+ * sqrt|l1 l2|, taken as sqrt|l1| sqrt|l2| where the product itself would underflow or
+ * overflow (roots near 1e-160 or 1e160).
+ */
+export function geometricMean(l1: number, l2: number): number {
+  const product = Math.abs(l1 * l2);
+  if (Number.isFinite(product) && product >= 2 ** -1022) return Math.sqrt(product);
+  return Math.sqrt(Math.abs(l1)) * Math.sqrt(Math.abs(l2));
 }

@@ -20,6 +20,8 @@ export interface Root {
   participation: number[];
   /** participation summed per state group */
   groupShare: Record<StateGroup, number>;
+  /** [1/s] bound on the rounding error of `value` (eigen.ts) */
+  errorBound: number;
 }
 
 export interface RootSet {
@@ -56,7 +58,7 @@ export function collectRoots(A: readonly (readonly number[])[], states: readonly
     values.push(...system.values);
     for (let j = 0; j < system.n; j += 1) {
       const value = system.values[j]!;
-      const oscillatory = Math.abs(value.im) > REAL_ROOT_TOLERANCE * Math.sqrt(value.re ** 2 + value.im ** 2);
+      const oscillatory = Math.abs(value.im) > REAL_ROOT_TOLERANCE * Math.hypot(value.re, value.im);
       if (oscillatory && value.im < 0) continue;
       const share = participation(system, j);
       const groupShare: Record<StateGroup, number> = { longitudinal: 0, lateral: 0, kinematic: 0, other: 0 };
@@ -68,6 +70,7 @@ export function collectRoots(A: readonly (readonly number[])[], states: readonly
         vector: system.right[j]!,
         participation: share,
         groupShare,
+        errorBound: system.errorBound[j]!,
       });
     }
   }

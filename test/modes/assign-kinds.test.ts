@@ -14,6 +14,7 @@ function root(re: number, im: number, share: Record<string, number>): Root {
     vector: { re: participation.slice(), im: states.map(() => 0) },
     participation,
     groupShare: { longitudinal: 0, lateral: 1, kinematic: 0, other: 0 },
+    errorBound: 0,
   };
 }
 
