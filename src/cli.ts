@@ -95,6 +95,7 @@ export async function main(argv: string[], io: Io = defaultIo()): Promise<number
         ...(opts.modeShapes ? { modeShapes: true } : {}),
         onStart: (head) => checkOutputsAreNotInputs(outputs, head.inputs),
       });
+      for (const w of outcome.model.warnings ?? []) io.err(`warning: ${visible(w)}`);
       if (opts.json !== undefined) tellModeShapes(outcome, io);
       io.out(formatResultsText(outcome.results, { color: io.color, detail: 'all', findings: false }));
       await writeAndTell(outcome, { ...(opts.json !== undefined ? { json: opts.json } : {}), paper: 'A4', failOn: 'fail', detail: 'all' }, io);
@@ -162,8 +163,14 @@ async function checkCommand(modelPath: string, opts: CheckCommandOptions, argv: 
   // a bad baseline or an output that cannot be written is reported at once; once the model
   // and criteria are read, no output may be one of them.
   const baseline = opts.baseline !== undefined ? await readInputFile(opts.baseline, { limitBytes: BASELINE_LIMIT_BYTES }) : undefined;
+  // the comparison's machinery (and the baseline schema) loads only with a baseline
+  const compare = baseline ? await Promise.all([import('./compare/compare-results.js'), import('./compare/format-comparison.js')]) : undefined;
+  const baselineResults = baseline && compare ? compare[0].parseBaselineResults(baseline.text, baseline.path) : undefined;
   const outputs = outputPaths(modelPath, opts);
   await checkOutputPaths(outputs);
+  // a PDF's browser is looked for now, not after a long sweep (one that exists but will not
+  // start is found only when it is started)
+  if (opts.pdf !== undefined) (await import('./report/browser.js')).findBrowser(opts.browser);
   const baselineInput = baseline ? [{ role: 'baseline' as const, path: baseline.path, sha256: baseline.sha256 }] : [];
   // The results JSON of a large sweep and the JUnit file are written as the conditions are
   // checked (to regular files; a device is written through at the end), and only the
@@ -185,6 +192,7 @@ async function checkCommand(modelPath: string, opts: CheckCommandOptions, argv: 
       onProgress: progress.onProgress,
       onStart: (head: ResultsHead, total: number) => {
         checkOutputsAreNotInputs(outputs, [...head.inputs, ...baselineInput]);
+        checkReportSize(outputs, total);
         if (streamsTo(opts.json) && total > INDENT_UP_TO_CONDITIONS) streams.json = ResultsJsonFile.open(opts.json, head);
         if (streamsTo(opts.junit)) streams.junit = JunitFile.open(opts.junit, head.aircraft.name, { failOn: opts.failOn });
       },
@@ -203,7 +211,7 @@ async function checkCommand(modelPath: string, opts: CheckCommandOptions, argv: 
         : {}),
     }).finally(progress.stop);
     const total = outcome.conditionCount;
-    return await reportCheck(outcome, { modelPath, opts, baseline, detail: detailFor(total), terminalDetail: terminalDetailFor(total), streams }, io);
+    return await reportCheck(outcome, { modelPath, opts, baseline, baselineResults, compare, detail: detailFor(total), terminalDetail: terminalDetailFor(total), streams }, io);
   } catch (err) {
     // files begun during the check are dropped; the last good ones stay in place
     streams.json?.abort();
@@ -218,10 +226,16 @@ interface Streams {
   junit?: JunitFile;
 }
 
+type BaselineResults = ReturnType<typeof import('./compare/compare-results.js').parseBaselineResults>;
+
 interface ReportContext {
   modelPath: string;
   opts: CheckCommandOptions;
   baseline: Awaited<ReturnType<typeof readInputFile>> | undefined;
+  /** the baseline, parsed before the check */
+  baselineResults: BaselineResults | undefined;
+  /** the comparison's modules, loaded only with a baseline */
+  compare: [typeof import('./compare/compare-results.js'), typeof import('./compare/format-comparison.js')] | undefined;
   detail: 'all' | 'issues' | 'none';
   /** the terminal's own: a sweep beyond a few conditions lists those with issues */
   terminalDetail: 'all' | 'issues' | 'none';
@@ -230,12 +244,12 @@ interface ReportContext {
 }
 
 async function reportCheck(outcome: CheckOutcome, context: ReportContext, io: Io): Promise<number> {
-  const { modelPath, opts, baseline, detail, terminalDetail, streams } = context;
+  const { modelPath, opts, baseline, baselineResults, detail, terminalDetail, streams } = context;
   if (baseline) outcome.results.inputs.push({ role: 'baseline', path: baseline.path, sha256: baseline.sha256 });
-  // the comparison's machinery (and the baseline schema) loads only with a baseline
-  const compare = baseline ? await Promise.all([import('./compare/compare-results.js'), import('./compare/format-comparison.js')]) : undefined;
-  const comparison = baseline && compare ? compare[0].compareResults(outcome.results, compare[0].parseBaselineResults(baseline.text, baseline.path)) : undefined;
+  const compare = context.compare;
+  const comparison = baselineResults && compare ? compare[0].compareResults(outcome.results, baselineResults) : undefined;
 
+  for (const w of outcome.model.warnings ?? []) io.err(`warning: ${visible(w)}`);
   const total = outcome.conditionCount;
   if (!opts.detail && total > SMALL_SWEEP) {
     const where = total > LARGE_RUN ? 'here and in the report' : 'here (the report has every one)';
@@ -304,6 +318,29 @@ async function whileCleaningUpOnSignals<T>(io: Io, work: () => Promise<T>): Prom
   }
 }
 
+/**
+ * Most conditions a review document is made for. The document is built in memory as one text;
+ * at 100,000 conditions it passes the largest string the JavaScript engine can hold, and fails
+ * after the whole sweep was checked. 10,000 take a few seconds (bench/sweep.mjs).
+ */
+export const REPORT_CONDITION_LIMIT = 20_000;
+
+/** Stop before the work when a review document is asked of a sweep too large for one. */
+function checkReportSize(outputs: readonly OutputPath[], total: number): void {
+  const report = outputs.find((o) => o.option === '--html' || o.option === '--pdf');
+  if (!report || total <= REPORT_CONDITION_LIMIT) return;
+  throw new InputError([
+    {
+      file: '<command line>',
+      field: report.option,
+      message: `a review document of ${total} conditions is more than modalgate writes (at most ${REPORT_CONDITION_LIMIT}); check the sweep in parts, or write only --json and --junit for the whole of it`,
+      expected: `at most ${REPORT_CONDITION_LIMIT} conditions with --html or --pdf`,
+      found: `${total} conditions`,
+      code: 'output_too_large',
+    },
+  ]);
+}
+
 /** The outputs a check writes, by option; with none named, the HTML report beside the model. */
 function outputPaths(modelPath: string, opts: CheckCommandOptions): OutputPath[] {
   const named: OutputPath[] = [];
@@ -338,6 +375,9 @@ function collect(value: string, previous: string[] | undefined): string[] {
   return [...(previous ?? []), value];
 }
 
+/** Problems of the command line's outputs or of the machine (not of the model or criteria files). */
+const SETUP_CODES = /^(output_|no_browser$|browser_)/;
+
 function reportError(err: unknown, io: Io): number {
   if (err instanceof CommanderError) {
     if (err.code === 'commander.helpDisplayed' || err.code === 'commander.version' || err.code === 'commander.help') return EXIT.ok;
@@ -350,7 +390,8 @@ function reportError(err: unknown, io: Io): number {
   }
   if (err instanceof InputError) {
     io.err(err.message);
-    io.err(`modalgate: ${err.issues.length} problem(s) in the input; nothing was written`);
+    const where = err.issues.every((i) => SETUP_CODES.test(i.code)) ? 'with the outputs or the browser' : 'in the input';
+    io.err(`modalgate: ${err.issues.length} problem(s) ${where}; nothing was written`);
     return EXIT.badInput;
   }
   const e = err as Error;

@@ -95,7 +95,7 @@ export async function checkOutputPaths(outputs: readonly OutputPath[]): Promise<
   for (const output of outputs) {
     const { option, path } = output;
     if (path.trim() === '') {
-      issues.push({ file: '(command line)', field: option, message: 'the output path is empty', expected: 'a file name', found: JSON.stringify(path), code: 'output_path' });
+      issues.push({ file: '<command line>', field: option, message: 'the output path is empty', expected: 'a file name', found: JSON.stringify(path), code: 'output_path' });
       continue;
     }
     const target = realTarget(path);

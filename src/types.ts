@@ -90,6 +90,8 @@ export interface AircraftModel {
   /** the unit system the file was written in (the model itself is SI) */
   units: UnitSystem;
   conditions: FlightCondition[];
+  /** what reading the file let pass but the user should know (e.g. a YAML tag modalgate does not know), with its place */
+  warnings?: string[];
 }
 
 // ---------------------------------------------------------------- modes

@@ -124,7 +124,7 @@ describe('outputs do not share a file', () => {
     const model = modelIn(dir);
     const r = await run('check', model, '--json', '');
     expect(r.code).toBe(2);
-    expect(r.err).toContain('(command line): --json: the output path is empty');
+    expect(r.err).toContain('<command line>: --json: the output path is empty');
     expect(readdirSync(dir)).toEqual(['model.yaml']);
   });
 });

@@ -32,7 +32,9 @@ const idText = z.string().regex(/^[a-z0-9]+(?:[-_.][a-z0-9]+)*$/, 'an id of lowe
 const phaseCode = z.string().regex(/^[A-Z]{1,4}$/, 'a flight-phase code of capital letters, e.g. CR');
 
 const boundValue = z
-  .union([z.number(), z.literal(PROGRAMME_VALUE)])
+  .union([z.number(), z.literal(PROGRAMME_VALUE)], {
+    error: `a bound must be a finite number in the quantity's SI unit, or "${PROGRAMME_VALUE}"; leave min or max out for no bound on that side`,
+  })
   .describe(`a number in the quantity's SI unit, or "${PROGRAMME_VALUE}" where the programme must choose it`);
 
 export const boundSchema = z

@@ -11,7 +11,7 @@ import { realpathSync } from 'node:fs';
 import { dirname, isAbsolute, join, relative, sep } from 'node:path';
 import { InputError, type InputIssue } from '../errors.js';
 import type { AircraftModel } from '../types.js';
-import { parseModel, type TableText } from './model-file.js';
+import { parseModel, type KnownPhases, type TableText } from './model-file.js';
 import { readInputFile } from './read-file.js';
 import { parseStructuredText } from './structured-text.js';
 
@@ -23,6 +23,8 @@ export interface LoadedModel {
 export interface LoadOptions {
   /** folders besides the model's own whose files the model may name */
   trustedFolders?: readonly string[];
+  /** the phases of the run's criteria sets: an unknown phase is reported at its field */
+  knownPhases?: KnownPhases;
 }
 
 export async function loadModel(path: string, options: LoadOptions = {}): Promise<LoadedModel> {
@@ -39,7 +41,7 @@ export async function loadModel(path: string, options: LoadOptions = {}): Promis
     tables[ref.file] = { path: table.path, text: table.text };
     files.push({ role: 'table', path: table.path, sha256: table.sha256 });
   }
-  return { model: parseModel(modelFile.text, modelFile.path, tables), files };
+  return { model: parseModel(modelFile.text, modelFile.path, tables, options.knownPhases), files };
 }
 
 /** Whether `path` lies, by real path, inside `folder` (itself by real path). */

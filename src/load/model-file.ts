@@ -44,7 +44,14 @@ interface Entry {
 
 const acceptsCondition = quickCheck(conditionSchema);
 
-export function parseModel(text: string, file: string, tables: Record<string, TableText> = {}): AircraftModel {
+/**
+ * The flight phases the criteria sets of the run know (phase code -> the ids of the sets that
+ * give it a category); with it, a condition's unknown phase is reported at its `phase` field
+ * (or table cell) with every other problem of the file.
+ */
+export type KnownPhases = { sets: { id: string; phases: string[] }[] };
+
+export function parseModel(text: string, file: string, tables: Record<string, TableText> = {}, known?: KnownPhases): AircraftModel {
   const source = parseStructuredText(text, file);
   const issues: InputIssue[] = [];
 
@@ -90,6 +97,19 @@ export function parseModel(text: string, file: string, tables: Record<string, Ta
     if (entry.unreadable.length > 0) continue;
     // Without a valid header the condition is still checked (shapes, forms) so that every
     // problem shows at once; its numbers are read as SI only for that and then dropped.
+    const unknownIn = known?.sets.filter((set) => !set.phases.includes(written.phase)) ?? [];
+    if (unknownIn.length > 0) {
+      const phases = [...new Set(known!.sets.flatMap((set) => set.phases))];
+      issues.push(
+        entry.issueOf({
+          path: [...entry.path, 'phase'],
+          message: `flight phase '${written.phase}' has no category in criteria set${unknownIn.length > 1 ? 's' : ''} ${unknownIn.map((set) => `'${set.id}'`).join(', ')}`,
+          expected: phases.join(' | ') || 'a phase listed under phaseCategories of the criteria set',
+          found: JSON.stringify(written.phase),
+          code: 'unknown_phase',
+        }),
+      );
+    }
     const built = buildCondition(written, settings ?? CHECK_ONLY, entry.path);
     if (!built.ok) {
       issues.push(...built.problems.map((p) => entry.issueOf(p)));
@@ -106,6 +126,7 @@ export function parseModel(text: string, file: string, tables: Record<string, Ta
     aircraft: { name: top.data.aircraft.name, class: top.data.aircraft.class },
     units: top.data.units,
     conditions,
+    ...(source.warnings ? { warnings: source.warnings } : {}),
   };
 }
 

@@ -17,6 +17,8 @@ export interface StructuredText {
   locate(path: readonly PropertyKey[]): { line: number; column: number } | undefined;
   /** 1-based line and column of the key of the mapping entry at `path` (for unknown fields) */
   locateKey?(path: readonly PropertyKey[]): { line: number; column: number } | undefined;
+  /** `file:line:col: ...` of what the YAML reader let pass (an unknown tag: its value is read as written) */
+  warnings?: string[];
 }
 
 export function parseStructuredText(text: string, file: string): StructuredText {
@@ -50,7 +52,7 @@ export function parseStructuredText(text: string, file: string): StructuredText 
   }
   const doc = parseWithPositions(text, file);
   if (doc.errors.length > 0) throw new InputError(doc.errors);
-  return { value: doc.value, file, locate: doc.locate, locateKey: doc.locateKey };
+  return { value: doc.value, file, locate: doc.locate, locateKey: doc.locateKey, ...(doc.warnings.length > 0 ? { warnings: doc.warnings } : {}) };
 }
 
 function parseWithPositions(text: string, file: string) {
@@ -68,6 +70,11 @@ function parseWithPositions(text: string, file: string) {
     };
   });
   const value: unknown = errors.length === 0 ? toValue(doc, file, lineCounter) : undefined;
+  const warnings = doc.warnings.map((w) => {
+    const pos = w.linePos?.[0] ?? lineCounter.linePos(w.pos[0]);
+    const text = /^Unresolved tag/i.test(w.message) ? `${w.message.split('\n')[0]}: modalgate does not know this YAML tag; the value is read as if it were not there` : w.message.split('\n')[0];
+    return `${file}:${pos.line}:${pos.col}: ${text}`;
+  });
   const locate = (path: readonly PropertyKey[]) => {
     let node: unknown = doc.contents;
     let best: Node | undefined = isNode(node) ? node : undefined;
@@ -105,7 +112,7 @@ function parseWithPositions(text: string, file: string) {
     const pos = lineCounter.linePos(pair.key.range[0]);
     return { line: pos.line, column: pos.col };
   };
-  return { value, errors, locate, locateKey, document: doc, linePos: (offset: number) => lineCounter.linePos(offset) };
+  return { value, errors, warnings, locate, locateKey, document: doc, linePos: (offset: number) => lineCounter.linePos(offset) };
 }
 
 /**
