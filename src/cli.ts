@@ -296,8 +296,9 @@ async function writeAndTell(outcome: CheckOutcome, request: OutputRequest, io: I
  * While outputs are rendered and written (the asynchronous part of a run, when a signal is
  * handled at once), SIGINT or SIGTERM removes this run's temporary files before it stops; a
  * set of outputs being put in place is completed first. A run stopped while it checks the
- * conditions leaves at most one temporary results file, named so that the next run writing
- * that output removes it (write-atomic.ts).
+ * conditions (synchronous work, during which no signal handler runs) leaves the temporary files
+ * of the outputs it writes as it goes, named so that the next run writing them removes them
+ * (write-atomic.ts).
  */
 async function whileCleaningUpOnSignals<T>(io: Io, work: () => Promise<T>): Promise<T> {
   const onSignal = (signal: NodeJS.Signals) => {
