@@ -61,7 +61,7 @@ export interface CheckOutcome {
 
 export async function runCheck(request: CheckRequest): Promise<CheckOutcome> {
   // criteria first: a condition's phase unknown to them is then reported at its field
-  const loaded = refuseRepeatedSets(await Promise.all(request.criteria.map((ref) => loadCriteriaSet(ref))), request.criteria);
+  const loaded = refuseRepeatedSets(await Promise.all(request.criteria.map((ref) => loadCriteriaSet(ref, { trustedFolders: request.trustedFolders ?? [] }))), request.criteria);
   const sets = loaded.map((l) => l.set);
   checkSourceIdsAgree(sets);
   const knownPhases = { sets: sets.map((s) => ({ id: s.id, phases: Object.keys(s.phaseCategories) })) };

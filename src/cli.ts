@@ -106,16 +106,18 @@ export async function main(argv: string[], io: Io = defaultIo()): Promise<number
     .command('show')
     .argument('<file>', 'criteria file or shipped set id')
     .description('print the resolved criteria set (after extends and overrides) as a table')
-    .action(async (file: string) => {
-      const [{ set }, { formatCriteriaSetText }] = await Promise.all([loadCriteriaSet(file), import('./report/criteria-text.js')]);
+    .option('--trust-folder <folder>', 'a folder besides the file\'s own that its extends may name (repeatable)', collect, [])
+    .action(async (file: string, opts: { trustFolder: string[] }) => {
+      const [{ set }, { formatCriteriaSetText }] = await Promise.all([loadCriteriaSet(file, { trustedFolders: opts.trustFolder }), import('./report/criteria-text.js')]);
       io.out(formatCriteriaSetText(set));
     });
   criteria
     .command('check')
     .argument('<file>', 'criteria file or shipped set id')
     .description('validate a criteria file and its extends chain')
-    .action(async (file: string) => {
-      const { set, files } = await loadCriteriaSet(file);
+    .option('--trust-folder <folder>', 'a folder besides the file\'s own that its extends may name (repeatable)', collect, [])
+    .action(async (file: string, opts: { trustFolder: string[] }) => {
+      const { set, files } = await loadCriteriaSet(file, { trustedFolders: opts.trustFolder });
       io.out(visible(`${file}: valid; set ${set.id} (${set.chain.join(' > ')}), ${set.criteria.length} criteria, ${set.dropped.length} dropped, ${files.length} file(s)`));
     });
 

@@ -95,6 +95,12 @@ const cases: Case[] = [
     says: [`{dir}/sub/m.yaml:11:9: conditionTable.file: the condition table {dir}/ketra-kt4-envelope.csv lies outside the model's folder {dir}/sub; a model may name only files inside its folder (--trust-folder <folder> allows another) (expected a path inside the model's folder, found "{dir}/ketra-kt4-envelope.csv") [outside_folder]`],
   },
   {
+    name: 'a criteria file extending a file outside its folder',
+    files: { 'm.yaml': GOOD, 'sets/c.yaml': MIL.replace(/^format: (.*)$/m, 'format: $1\nextends: ../base.yaml'), 'base.yaml': MIL },
+    argv: ['check', '{dir}/m.yaml', '--criteria', '{dir}/sets/c.yaml', '--json', '{dir}/r.json'],
+    says: [`{dir}/sets/c.yaml:${MIL.split('\n').findIndex((l) => l.startsWith('format:')) + 2}:10: extends: the criteria file {dir}/base.yaml lies outside the folder of {dir}/sets/c.yaml; extends may name a shipped set or a file in that folder (--trust-folder <folder> allows another) (expected a shipped set id or a path inside the extending file's folder, found "../base.yaml") [outside_folder]`],
+  },
+  {
     name: 'a mapped column missing from the table is pointed at its mapping',
     files: { 'm.yaml': ENVELOPE, 'ketra-kt4-envelope.csv': ENVELOPE_TABLE.replace(/^case,phase,V,h,/, 'case,phase,V,alt,') },
     argv: ['check', '{dir}/m.yaml', '--json', '{dir}/r.json'],

@@ -11,6 +11,7 @@ import { InputError, type InputIssue } from '../errors.js';
 import type { ParsedCriteriaFile } from '../criteria/parsed-criteria-file.js';
 import { resolveCriteriaChain } from '../criteria/resolve.js';
 import type { Place, ResolvedCriteriaSet } from '../types.js';
+import { isInside } from './contained.js';
 import { parsedFromCache } from './criteria-cache.js';
 import { criteriaFileSchema } from './criteria-schema.js';
 import { readRegularFile, sha256Hex, UnreadableFile, withoutByteOrderMark } from './read-file.js';
@@ -26,7 +27,12 @@ export interface LoadedCriteriaSet {
   files: { path: string; sha256: string }[];
 }
 
-export async function loadCriteriaSet(ref: string): Promise<LoadedCriteriaSet> {
+export interface CriteriaLoadOptions {
+  /** folders besides a criteria file's own (and the shipped sets) that its `extends` may name */
+  trustedFolders?: readonly string[];
+}
+
+export async function loadCriteriaSet(ref: string, options: CriteriaLoadOptions = {}): Promise<LoadedCriteriaSet> {
   const chain: { parsed: ParsedCriteriaFile; sha256: string }[] = [];
   const issues: InputIssue[] = [];
   const seen = new Map<string, string>();
@@ -67,7 +73,20 @@ export async function loadCriteriaSet(ref: string): Promise<LoadedCriteriaSet> {
     }
     if (typeof parent !== 'string') break;
     extendsAt = { file: shown, ...(source.locate(['extends']) ?? {}) };
-    next = locateRef(parent, next);
+    const from: Located = next;
+    next = locateRef(parent, from);
+    if (next && !isShipped(next) && ![path.dirname(from.absolute), ...(options.trustedFolders ?? [])].some((folder) => isInside(next!.absolute, folder))) {
+      // a criteria file cannot pull in files from elsewhere on the machine
+      issues.push({
+        ...extendsAt,
+        field: 'extends',
+        message: `the criteria file ${next.shown} lies outside the folder of ${from.shown}; extends may name a shipped set or a file in that folder (--trust-folder <folder> allows another)`,
+        expected: 'a shipped set id or a path inside the extending file\'s folder',
+        found: JSON.stringify(parent),
+        code: 'outside_folder',
+      });
+      break;
+    }
     if (!next) issues.push(unknownExtends(parent, extendsAt));
   }
   if (issues.length > 0) throw new InputError(issues);
@@ -137,6 +156,10 @@ function locateRef(ref: string, from: Located | undefined): Located | undefined 
   }
   if (!from) return { shown: ref, absolute: path.resolve(ref) };
   return { shown: path.join(path.dirname(from.shown), ref), absolute: path.resolve(path.dirname(from.absolute), ref) };
+}
+
+function isShipped(located: Located): boolean {
+  return isInside(located.absolute, SHIPPED_CRITERIA_DIR);
 }
 
 /** A shipped file is shown relative to the working directory when it lies below it. */

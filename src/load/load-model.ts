@@ -7,8 +7,8 @@
  * trusts (the command line's --trust-folder); a problem reading it is reported at the model's
  * `conditionTable.file`, never with the content of what was reached.
  */
-import { realpathSync } from 'node:fs';
-import { dirname, isAbsolute, join, relative, sep } from 'node:path';
+import { dirname, isAbsolute, join } from 'node:path';
+import { isInside, realOrSelf } from './contained.js';
 import { InputError, type InputIssue } from '../errors.js';
 import type { AircraftModel } from '../types.js';
 import { parseModel, type KnownPhases, type TableText } from './model-file.js';
@@ -44,12 +44,6 @@ export async function loadModel(path: string, options: LoadOptions = {}): Promis
   return { model: parseModel(modelFile.text, modelFile.path, tables, options.knownPhases), files };
 }
 
-/** Whether `path` lies, by real path, inside `folder` (itself by real path). */
-export function isInside(path: string, folder: string): boolean {
-  const rel = relative(realOrSelf(folder), realOrSelf(path));
-  return rel !== '' && !rel.startsWith(`..${sep}`) && rel !== '..' && !isAbsolute(rel);
-}
-
 function checkContained(tablePath: string, modelPath: string, trusted: readonly string[], namedAt: Omit<InputIssue, 'message' | 'code'>): void {
   const modelFolder = dirname(modelPath);
   if ([modelFolder, ...trusted].some((folder) => isInside(tablePath, folder))) return;
@@ -62,19 +56,6 @@ function checkContained(tablePath: string, modelPath: string, trusted: readonly 
       code: 'outside_folder',
     },
   ]);
-}
-
-/** The real path (links followed) of an existing file or folder; of a missing one, its folder's real path and its name. */
-function realOrSelf(path: string): string {
-  try {
-    return realpathSync(path);
-  } catch {
-    try {
-      return join(realpathSync(dirname(path)), path.slice(dirname(path).length + 1));
-    } catch {
-      return path;
-    }
-  }
 }
 
 /**

@@ -7,6 +7,7 @@ import { spawnSync } from 'node:child_process';
 import { mkdirSync, mkdtempSync, symlinkSync, truncateSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { InputError } from '../../src/errors.js';
 import { loadCriteriaSet } from '../../src/load/criteria-file.js';
@@ -90,6 +91,23 @@ describe('a model names only files inside its folder', () => {
     mkdirSync(join(root, 'model', 'tables'));
     writeFileSync(modelPath, model('tables'));
     expect(await messageOf(loadModel(modelPath))).toBe(`${modelPath}:5:9: conditionTable.file: the condition table ${join(root, 'model', 'tables')} is a folder, not a file [unreadable]`);
+  });
+});
+
+describe('a criteria file extends only shipped sets and files in its folder', () => {
+  it('a file outside is refused at extends; a trusted folder widens it; a shipped set by path is fine', async () => {
+    const root = mkdtempSync(join(tmpdir(), 'modalgate-extends-'));
+    mkdirSync(join(root, 'sets'));
+    mkdirSync(join(root, 'shared'));
+    const shipped = fileURLToPath(new URL('../../criteria/mil-f-8785c.yaml', import.meta.url));
+    // the shared base only extends the shipped set and renames it
+    writeFileSync(join(root, 'shared', 'base.yaml'), `format: modalgate-criteria/1\nid: shared-base\ntitle: Shared base\nextends: ${shipped}\ncriteria: []\n`);
+    writeFileSync(join(root, 'sets', 'c.yaml'), 'format: modalgate-criteria/1\nid: programme\ntitle: Programme\nextends: ../shared/base.yaml\ncriteria: []\n');
+    const message = await messageOf(loadCriteriaSet(join(root, 'sets', 'c.yaml')));
+    expect(message).toContain(`${join(root, 'sets', 'c.yaml')}:4:10: extends: the criteria file ${join(root, 'shared', 'base.yaml')} lies outside the folder of`);
+    const set = await loadCriteriaSet(join(root, 'sets', 'c.yaml'), { trustedFolders: [join(root, 'shared')] }).catch((e: unknown) => e);
+    expect(set instanceof InputError ? set.message : '').toBe('');
+    expect((set as { set: { chain: string[] } }).set.chain).toEqual(['mil-f-8785c', 'shared-base', 'programme']);
   });
 });
 
