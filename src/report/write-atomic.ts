@@ -20,10 +20,11 @@
  * results file of a 10,000-condition sweep, bench/sweep.mjs).
  */
 import { randomBytes } from 'node:crypto';
-import { realpathSync, rmSync, statSync } from 'node:fs';
+import { rmSync, statSync } from 'node:fs';
 import { link, lstat, open, readdir, readFile, rename, rm, writeFile } from 'node:fs/promises';
 import { basename, dirname, join } from 'node:path';
 import { InputError, type InputIssue } from '../errors.js';
+import { realPath } from '../real-path.js';
 import { outputError } from './output-error.js';
 
 /** Text produced piece by piece (e.g. a large results file), written in blocks. */
@@ -89,17 +90,7 @@ export function removeLiveTemporaries(then?: () => void): boolean {
  * The path the output really goes to: an existing file (or link) by its real path, a new one
  * in its folder's real path. Used to compare outputs with each other and with the inputs.
  */
-export function realTarget(path: string): string {
-  try {
-    return realpathSync(path);
-  } catch {
-    try {
-      return join(realpathSync(dirname(path)), basename(path));
-    } catch {
-      return path;
-    }
-  }
-}
+export const realTarget = realPath;
 
 /** What is at `target` now: nothing, a regular file, a character device, or something refused. */
 export function targetKind(target: string): 'none' | 'file' | 'device' | 'other' {
