@@ -61,15 +61,16 @@ function parseWithPositions(text: string, file: string) {
   const errors: InputIssue[] = doc.errors.map((e) => {
     // With prettyErrors off, yaml leaves linePos unset: place the error from its offset.
     const pos = e.linePos?.[0] ?? lineCounter.linePos(e.pos[0]);
+    if (/call stack/i.test(e.message)) return nestingIssue(text, file, lineCounter);
     return {
       file,
       ...(pos ? { line: pos.line, column: pos.col } : {}),
       field: '',
-      message: /call stack/i.test(e.message) ? NESTED_TOO_DEEPLY : `not valid YAML/JSON: ${e.message.split('\n')[0]}`,
+      message: `not valid YAML/JSON: ${e.message.split('\n')[0]}`,
       code: 'syntax',
     };
   });
-  const value: unknown = errors.length === 0 ? toValue(doc, file, lineCounter) : undefined;
+  const value: unknown = errors.length === 0 ? toValue(doc, text, file, lineCounter) : undefined;
   const warnings = doc.warnings.map((w) => {
     const pos = w.linePos?.[0] ?? lineCounter.linePos(w.pos[0]);
     const text = /^Unresolved tag/i.test(w.message) ? `${w.message.split('\n')[0]}: modalgate does not know this YAML tag; the value is read as if it were not there` : w.message.split('\n')[0];
@@ -144,6 +145,31 @@ function jsonSyntaxIssue(message: string, doc: ReturnType<typeof parseWithPositi
 }
 
 const NESTED_TOO_DEEPLY = 'lists or mappings are nested too deeply to read (a model or criteria file needs fewer than 20 levels)';
+/** Brackets open at once past which the place of a too-deep nesting is shown. */
+const DEEP = 64;
+
+/**
+ * Too deep a nesting, placed at the bracket that opens level DEEP + 1 (where the stack gave out
+ * depends on the machine; this place does not). Quotes are not tracked: a count that never
+ * reaches DEEP places the problem at the start of the file.
+ */
+function nestingIssue(text: string, file: string, lineCounter: LineCounter): InputIssue {
+  let depth = 0;
+  let at = 0;
+  for (let k = 0; k < text.length; k += 1) {
+    const ch = text[k];
+    if (ch === '[' || ch === '{') {
+      depth += 1;
+      if (depth > DEEP) {
+        at = k;
+        break;
+      }
+    } else if ((ch === ']' || ch === '}') && depth > 0) depth -= 1;
+  }
+  const pos = lineCounter.linePos(at);
+  return { file, line: pos.line, column: pos.col, field: '', message: NESTED_TOO_DEEPLY, code: 'syntax' };
+}
+
 /** Alias expansions allowed while building the value: a real file has a handful; an "alias bomb" has billions. */
 const MAX_ALIAS_COUNT = 1000;
 
@@ -151,7 +177,7 @@ const MAX_ALIAS_COUNT = 1000;
  * The document's value. A document whose aliases expand without bound (an "alias bomb") or that
  * nests deeper than the stack allows is bad input, reported at its first alias or at its start.
  */
-function toValue(doc: ReturnType<typeof parseDocument>, file: string, lineCounter: LineCounter): unknown {
+function toValue(doc: ReturnType<typeof parseDocument>, text: string, file: string, lineCounter: LineCounter): unknown {
   try {
     return doc.toJS({ maxAliasCount: MAX_ALIAS_COUNT });
   } catch (err) {
@@ -176,7 +202,7 @@ function toValue(doc: ReturnType<typeof parseDocument>, file: string, lineCounte
         },
       ]);
     }
-    if (err instanceof RangeError) throw new InputError([{ file, line: 1, column: 1, field: '', message: NESTED_TOO_DEEPLY, code: 'syntax' }]);
+    if (err instanceof RangeError) throw new InputError([nestingIssue(text, file, lineCounter)]);
     throw err;
   }
 }
