@@ -11,11 +11,12 @@ import { InputError, type InputIssue } from '../errors.js';
 import { parseStructuredText } from '../load/structured-text.js';
 import { issuesFromZod } from '../load/zod-issues.js';
 import { countVerdicts } from '../results.js';
-import { evidenceClasses, sourceKinds } from '../load/criteria-schema.js';
+import { evidenceClasses, quantities, sourceKinds } from '../load/criteria-schema.js';
 import type { ConditionResult, Finding, ResultMode, Results } from '../types.js';
 
 const modeKind = z.enum(['short_period', 'phugoid', 'dutch_roll', 'roll', 'spiral', 'roll_spiral', 'kinematic', 'other']);
-const quantity = z.enum(['damping_ratio', 'natural_frequency', 'cap', 'damping_frequency_product', 'time_to_double', 'time_constant']);
+// the quantities the criteria files may name: a results file holds findings of any of them
+const quantity = z.enum(quantities);
 const verdict = z.enum(['pass', 'marginal', 'fail', 'not_evaluated']);
 const level = z.literal([1, 2, 3]);
 /** JSON has no infinity: the results writer turns infinite figures into null. */
