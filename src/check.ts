@@ -9,7 +9,7 @@ import { loadCriteriaSet } from './load/criteria-file.js';
 import { loadModel } from './load/load-model.js';
 import { assembleResults, resultsContents, resultsHead } from './results.js';
 import { checkAllConditions } from './sweep/check-all.js';
-import type { AircraftModel, ConditionResult, InputFile, ResolvedCriteriaSet, Results, ResultsHead } from './types.js';
+import type { AircraftModel, ConditionResult, InputFile, ResolvedCriteriaSet, Results, ResultsHead, SensitivityChoice } from './types.js';
 
 export interface CheckRequest {
   /** path of the model file */
@@ -48,6 +48,8 @@ export interface CheckRequest {
    * the main thread.
    */
   keep?: (result: ConditionResult, total: number) => boolean;
+  /** which findings get design sensitivities (what would move them); absent = failing and marginal ones */
+  sensitivities?: SensitivityChoice;
 }
 
 export interface CheckOutcome {
@@ -75,10 +77,12 @@ export async function runCheck(request: CheckRequest): Promise<CheckOutcome> {
   const contents = resultsContents(total, request.modeShapes);
   request.onStart?.(resultsHead({ request, model, sets, inputs, contents }), total);
 
-  // per condition: analyse the modes, evaluate every set, assemble (worker threads for a big sweep)
+  // per condition: analyse the modes, evaluate every set, the design sensitivities of the
+  // chosen findings, assemble (worker threads for a big sweep)
   const { onCondition, keep } = request;
   const { results: conditions, issues, summary } = await checkAllConditions(model, sets, contents, {
     ...(request.workers !== undefined ? { workers: request.workers } : {}),
+    ...(request.sensitivities ? { sensitivities: request.sensitivities } : {}),
     ...(request.onProgress ? { onProgress: request.onProgress } : {}),
     ...(onCondition ? { onResult: (r: ConditionResult) => onCondition(r, total) } : {}),
     ...(keep ? { keep: (r: ConditionResult) => keep(r, total) } : {}),

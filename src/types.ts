@@ -82,7 +82,33 @@ export interface FlightCondition {
   /** conversions and defaults applied while building the model, shown in every output */
   notes: string[];
   place: Place;
+  /** the condition as written, kept to rebuild it with one number changed (design sensitivities) */
+  written?: WrittenSource;
 }
+
+/**
+ * A condition in its written form (a table row as if written in the model file), with what is
+ * needed to rebuild it and to name each of its numbers the way the user finds it in the files.
+ * Plain data, so that it travels to worker threads.
+ */
+export interface WrittenSource {
+  /** the written condition (numbers in the file's units) */
+  condition: Record<string, unknown>;
+  units: UnitSystem;
+  /** [written acceleration unit] g used in the kinematic terms */
+  gravity: number;
+  gravityOrigin: string;
+  naming: WrittenNaming;
+}
+
+/**
+ * How a number of the written condition is named: by its path in the model file
+ * (`conditions[2].lateral.derivatives.Nr`), or for a table row by `table.csv:LINE:HEADER`
+ * (numbers from `common` by `conditionTable.common.<path>`).
+ */
+export type WrittenNaming =
+  | { in: 'model'; prefix: (string | number)[] }
+  | { in: 'table'; file: string; line: number; columns: readonly { path: readonly (string | number)[]; header: string }[] };
 
 export interface AircraftModel {
   file: string;
@@ -240,7 +266,45 @@ export interface Finding {
   reason: string;
   /** how a derived figure was obtained (e.g. n/alpha method) */
   method?: string;
+  /**
+   * What would move it: the model's numbers with the largest normalised influence on the
+   * value, at most five (failing and marginal findings by default; see src/sensitivity/).
+   */
+  sensitivities?: Sensitivity[];
+  /** why a finding asked for has no sensitivities (e.g. a nearly defective mode) */
+  sensitivityNote?: string;
 }
+
+/** d value / d parameter of one number of the model as written, and the change that reaches the boundary. */
+export interface Sensitivity {
+  /** the number's place in the files: `conditions[0].stateSpace.A[3][2]`, `table.csv:14:Cma` */
+  parameter: string;
+  /** [file's unit] the number as written */
+  current: number;
+  /** [SI unit of the quantity per file's unit of the parameter] */
+  derivative: number;
+  /** |current x derivative| / distance of the value to its target (the boundary, or the band's edge when marginal) [-] */
+  influence: number;
+  /** the change of this number alone that reaches the target, or null (then `reason` says why) */
+  toBoundary: ToBoundary | null;
+  reason?: string;
+}
+
+export interface ToBoundary {
+  /** [file's unit] change found by re-analysis of the model (a one-dimensional root find) */
+  change: number;
+  /** [file's unit] linear estimate from the derivative */
+  estimate: number;
+  /** [SI unit of the quantity] value re-analysed at the change */
+  verifiedValue: number;
+  /** level reached at the change */
+  verifiedLevel: Level | null;
+  /** verdict at the change */
+  verifiedVerdict: Verdict;
+}
+
+/** Which findings get sensitivities: failing and marginal ones (the default), every one, or none. */
+export type SensitivityChoice = 'issues' | 'all' | 'none';
 
 /** An applicable criterion that makes no finding in a condition, and why (never a pass). */
 export interface NotApplicable {

@@ -46,6 +46,8 @@ export interface TableRead {
   issues: InputIssue[];
   /** problems placed in the model file, by path from its root */
   problems: ModelProblem[];
+  /** the columns read into every row: the field path each fills and its header */
+  columns: { path: (string | number)[]; header: string }[];
 }
 
 /** Fields every condition needs; each must come from a column or from `common`. */
@@ -85,7 +87,7 @@ export function readConditionTable(spec: ConditionTableSpec, table: { path: stri
   const [head, ...body] = csv.records;
   if (!head) {
     issues.push(at(1, undefined, '', { message: 'the table is empty', expected: 'a header line naming the columns, then one line per condition', found: 'nothing', code: 'empty_table' }));
-    return { rows: [], issues, problems };
+    return { rows: [], issues, problems, columns: [] };
   }
 
   // Header: every column is mapped or ignored, and every mapped header is there.
@@ -156,7 +158,8 @@ export function readConditionTable(spec: ConditionTableSpec, table: { path: stri
   }
   // With a mapping wrong or a column missing, every row would repeat the consequences: the
   // cells are read, the rows not checked.
-  return { rows: problems.length > 0 || missing.length > 0 ? [] : rows, issues, problems };
+  const columnsRead = usable.map((t) => ({ path: t.path, header: t.header }));
+  return { rows: problems.length > 0 || missing.length > 0 ? [] : rows, issues, problems, columns: columnsRead };
 }
 
 type CellRead = { ok: true; value: number | string | boolean | undefined } | { ok: false; message: string; expected: string; code: string };

@@ -9,7 +9,7 @@ import type { z } from 'zod';
 import { dedupeIssues, formatPath, InputError, type InputIssue } from '../errors.js';
 import { buildCondition, type BuildSettings } from '../model/build-condition.js';
 import type { ModelProblem } from '../model/problem.js';
-import type { AircraftModel, FlightCondition, Place } from '../types.js';
+import type { AircraftModel, FlightCondition, Place, WrittenNaming } from '../types.js';
 import { defaultGravity, STANDARD_GRAVITY } from '../units.js';
 import { readConditionTable, type RowPlace } from './condition-table.js';
 import { conditionSchema, conditionTableSchema, modelFileSchema, type WrittenCondition, type WrittenConditionTable } from './model-schema.js';
@@ -37,6 +37,8 @@ interface Entry {
   placeLater: () => Place;
   /** fields already reported as unreadable: no second issue for them */
   unreadable: (string | number)[][];
+  /** how the condition's numbers are named in the files */
+  naming: WrittenNaming;
   notes: string[];
   issuesOf(error: z.ZodError): InputIssue[];
   issueOf(problem: ModelProblem): InputIssue;
@@ -116,7 +118,8 @@ export function parseModel(text: string, file: string, tables: Record<string, Ta
       continue;
     }
     if (!settings) continue;
-    conditions.push(withLazyPlace({ ...built.value, notes: [...built.value.notes, ...entry.notes] }, entry.placeLater));
+    const writtenSource = { condition: written as Record<string, unknown>, ...settings, naming: entry.naming };
+    conditions.push(withLazyPlace({ ...built.value, notes: [...built.value.notes, ...entry.notes], written: writtenSource }, entry.placeLater));
   }
 
   const unique = dedupeIssues(issues);
@@ -146,6 +149,7 @@ function writtenEntries(root: Record<string, unknown>, source: StructuredText): 
       },
       placeLater,
       unreadable: [],
+      naming: { in: 'model', prefix: path },
       notes: [],
       issuesOf: (error) => issuesFromZod(prefixed(error, path), source),
       issueOf: (problem) => issueFromProblem(problem, source),
@@ -176,6 +180,7 @@ function tableEntries(table: WrittenConditionTable, tables: Record<string, Table
       place,
       placeLater: () => place,
       unreadable: row.unreadable,
+      naming: { in: 'table', file: text.path, line: row.line, columns: read.columns },
       notes: row.notes,
       issuesOf: (error) =>
         error.issues.map((zodIssue) => {

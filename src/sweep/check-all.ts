@@ -10,7 +10,7 @@
  * large sweeps on machines with spare cores, and `workers` forces either way.
  */
 import { availableParallelism } from 'node:os';
-import type { AircraftModel, ResolvedCriteriaSet, ResultsContents } from '../types.js';
+import type { AircraftModel, ResolvedCriteriaSet, ResultsContents, SensitivityChoice } from '../types.js';
 import { checkConditions, type CheckEach, type ConditionsChecked } from './check-conditions.js';
 import { checkConditionsInWorkers } from './worker-pool.js';
 
@@ -31,6 +31,8 @@ export interface CheckAllOptions {
    */
   onResult?: CheckEach['onResult'];
   keep?: CheckEach['keep'];
+  /** which findings get design sensitivities; absent = failing and marginal ones */
+  sensitivities?: SensitivityChoice;
 }
 
 /** Worker threads for a sweep of `count` conditions: none below PARALLEL_FROM or MIN_CORES. */
@@ -53,6 +55,7 @@ export async function checkAllConditions(
     const onEach = options.onProgress ? (done: number) => options.onProgress!(done, total) : undefined;
     return checkConditions(conditions, model.aircraft.class, sets, contents, {
       ...(onEach ? { onEach } : {}),
+      ...(options.sensitivities ? { sensitivities: options.sensitivities } : {}),
       ...(options.onResult ? { onResult: options.onResult } : {}),
       ...(options.keep ? { keep: options.keep } : {}),
     });
@@ -60,5 +63,6 @@ export async function checkAllConditions(
   return checkConditionsInWorkers(conditions, model.aircraft.class, sets, contents, {
     workers,
     ...(options.onProgress ? { onProgress: options.onProgress } : {}),
+    ...(options.sensitivities ? { sensitivities: options.sensitivities } : {}),
   });
 }

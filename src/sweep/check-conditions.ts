@@ -9,7 +9,8 @@ import { analyseModes } from '../modes/analyse.js';
 import { analyseResponses } from '../responses/analyse-responses.js';
 import { bankAnglesOf } from '../criteria/bank-angles.js';
 import { assembleCondition } from '../results.js';
-import type { AircraftClass, ConditionResult, FlightCondition, ResolvedCriteriaSet, ResultsContents, VerdictCounts } from '../types.js';
+import { withSensitivities } from '../sensitivity/finding-sensitivities.js';
+import type { AircraftClass, ConditionResult, FlightCondition, ResolvedCriteriaSet, ResultsContents, SensitivityChoice, VerdictCounts } from '../types.js';
 
 export interface ConditionsChecked {
   /** one per condition, in the order given (only those kept, when a `keep` test was given) */
@@ -27,6 +28,8 @@ export interface CheckEach {
   onResult?: (result: ConditionResult) => void;
   /** which results to keep in `results`; absent = all */
   keep?: (result: ConditionResult) => boolean;
+  /** which findings get design sensitivities; absent = failing and marginal ones */
+  sensitivities?: SensitivityChoice;
 }
 
 export function checkConditions(
@@ -40,8 +43,9 @@ export function checkConditions(
   const issues: InputIssue[] = [];
   const summary: VerdictCounts = { pass: 0, marginal: 0, fail: 0, not_evaluated: 0 };
   const { onEach, onResult, keep } = each;
+  const choice = each.sensitivities ?? 'issues';
   for (let index = 0; index < conditions.length; index += 1) {
-    const result = checkOneCondition(conditions[index]!, aircraftClass, sets, contents, issues);
+    const result = checkOneCondition(conditions[index]!, aircraftClass, sets, contents, issues, choice);
     for (const f of result.findings) summary[f.verdict] += 1;
     onResult?.(result);
     if (keep === undefined || keep(result)) results.push(result);
@@ -50,20 +54,25 @@ export function checkConditions(
   return { results, issues, summary };
 }
 
-/** One condition; its input problems are added to `issues`, any other error is thrown. */
+/**
+ * One condition: modes, findings per set, then the design sensitivities of the chosen
+ * findings. Its input problems are added to `issues`, any other error is thrown.
+ */
 export function checkOneCondition(
   condition: FlightCondition,
   aircraftClass: AircraftClass,
   sets: readonly ResolvedCriteriaSet[],
   contents: ResultsContents,
   issues: InputIssue[],
+  sensitivities: SensitivityChoice = 'issues',
 ): ConditionResult {
   const analysis = analyseModes(condition.system, { airspeed: condition.airspeed });
   const responses = analyseResponses(condition, analysis, { bankAngles: bankAnglesOf(sets) });
   const evaluations = [];
   for (const set of sets) {
     try {
-      evaluations.push(evaluateCondition({ aircraftClass, condition, analysis, set, responses }));
+      const evaluation = evaluateCondition({ aircraftClass, condition, analysis, set, responses });
+      evaluations.push(withSensitivities({ aircraftClass, condition, analysis, set, evaluation, choice: sensitivities }));
     } catch (err) {
       if (err instanceof InputError) issues.push(...err.issues);
       else throw err;

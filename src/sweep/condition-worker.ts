@@ -24,7 +24,7 @@ port.once('message', (share: ShareMessage) => {
 });
 
 function checkShare(share: ShareMessage, send: (message: WorkerMessage) => void): void {
-  const { conditions, aircraftClass, sets, contents, batch } = share;
+  const { conditions, aircraftClass, sets, contents, batch, sensitivities } = share;
   let lines: string[] = [];
   let exact: [number, ConditionResult][] = [];
   let issues: InputIssue[] = [];
@@ -35,7 +35,7 @@ function checkShare(share: ShareMessage, send: (message: WorkerMessage) => void)
     issues = [];
   };
   for (const condition of conditions) {
-    const result = checkOneCondition(condition, aircraftClass, sets, contents, issues);
+    const result = checkOneCondition(condition, aircraftClass, sets, contents, issues, sensitivities);
     if (!isJsonSafe(result)) exact.push([lines.length, result]);
     lines.push(conditionJson(result));
     if (lines.length >= batch) flush();

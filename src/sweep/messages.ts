@@ -1,6 +1,6 @@
 /** What the main thread and a condition worker say to each other (structured-cloned). */
 import type { InputIssue } from '../errors.js';
-import type { AircraftClass, ConditionResult, FlightCondition, ResolvedCriteriaSet, ResultsContents } from '../types.js';
+import type { AircraftClass, ConditionResult, FlightCondition, ResolvedCriteriaSet, ResultsContents, SensitivityChoice } from '../types.js';
 
 /** main -> worker, once: a contiguous share of the sweep's conditions */
 export interface ShareMessage {
@@ -10,6 +10,8 @@ export interface ShareMessage {
   contents: ResultsContents;
   /** conditions per batch message sent back */
   batch: number;
+  /** which findings get design sensitivities */
+  sensitivities: SensitivityChoice;
 }
 
 /**

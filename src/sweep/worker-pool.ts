@@ -8,7 +8,7 @@ import { Worker } from 'node:worker_threads';
 import { InternalError, type InputIssue } from '../errors.js';
 import { rememberConditionsJson } from '../report/json.js';
 import { addVerdictCounts, countVerdicts } from '../results.js';
-import type { AircraftClass, ConditionResult, FlightCondition, ResolvedCriteriaSet, ResultsContents } from '../types.js';
+import type { AircraftClass, ConditionResult, FlightCondition, ResolvedCriteriaSet, ResultsContents, SensitivityChoice } from '../types.js';
 import { checkConditions, type ConditionsChecked } from './check-conditions.js';
 import type { BatchMessage, ShareMessage, WorkerMessage } from './messages.js';
 
@@ -19,6 +19,8 @@ export interface PoolOptions {
   batch?: number;
   /** called as batches arrive, with the conditions done over all workers */
   onProgress?: (done: number, total: number) => void;
+  /** which findings get design sensitivities; absent = failing and marginal ones */
+  sensitivities?: SensitivityChoice;
 }
 
 const DEFAULT_BATCH = 250;
@@ -33,6 +35,7 @@ export async function checkConditionsInWorkers(
   const total = conditions.length;
   const workers = Math.max(1, Math.min(options.workers, total));
   const batch = options.batch ?? DEFAULT_BATCH;
+  const sensitivities = options.sensitivities ?? 'issues';
   let done = 0;
   const progress = (n: number) => {
     done += n;
@@ -41,11 +44,11 @@ export async function checkConditionsInWorkers(
   // The main thread takes the first share itself, while the workers start up.
   const [own, ...rest] = splitShares(total, workers + 1);
   const shares = rest.map(([from, to]) =>
-    runShare({ conditions: conditions.slice(from, to), aircraftClass, sets: [...sets], contents, batch }, progress),
+    runShare({ conditions: conditions.slice(from, to), aircraftClass, sets: [...sets], contents, batch, sensitivities }, progress),
   );
   let mine: ConditionsChecked;
   try {
-    mine = checkConditions(conditions.slice(own![0], own![1]), aircraftClass, sets, contents, { onEach: () => progress(1) });
+    mine = checkConditions(conditions.slice(own![0], own![1]), aircraftClass, sets, contents, { onEach: () => progress(1), sensitivities });
   } catch (err) {
     for (const share of shares) {
       share.stop();

@@ -1,0 +1,254 @@
+/**
+ * What would move it: for each chosen finding, the derivative of its value with respect to
+ * every number of the model as written, the five with the largest normalised influence, and
+ * for each of them the change that reaches the boundary, verified by re-analysis.
+ *
+ * d value / d p = d value / d lambda . y^T (dA/dp) x / (y^T x) (figure-slope.ts,
+ * root-vectors.ts), where dA/dp is taken through the pure model build (rebuild.ts) by a
+ * central difference: the build is a rational function of each written number, exact or
+ * nearly so to first order, while the eigen-analysis, which is not, is differentiated
+ * analytically. Pure: no file, clock or randomness.
+ */
+import { nOverAlpha } from '../criteria/derived-figures.js';
+import { evaluateCondition, type ConditionEvaluation } from '../criteria/evaluate.js';
+import { bandAround } from '../criteria/verdict.js';
+import { InternalError } from '../errors.js';
+import { analyseModes } from '../modes/analyse.js';
+import type {
+  AircraftClass,
+  Complex,
+  Finding,
+  FlightCondition,
+  ModalAnalysis,
+  Mode,
+  ResolvedCriteriaSet,
+  Sensitivity,
+  SensitivityChoice,
+} from '../types.js';
+import { figureSlope, MODAL_QUANTITIES, type NAlphaSlope } from './figure-slope.js';
+import { rebuildWith } from './rebuild.js';
+import { eigenvalueChange, rootVectors, type RootVectors } from './root-vectors.js';
+import { searchBoundary, type Trial } from './to-boundary.js';
+import { writtenNumbers, type NumberPath } from './written-numbers.js';
+
+/** How many numbers are kept per finding, by influence. */
+export const TOP = 5;
+/** Relative step of the central difference of the build. */
+const BUILD_STEP = 1e-6;
+/** Eigenvalue condition number ||y|| ||x|| / |y^T x| above which a root counts as nearly defective. */
+export const DEFECTIVE_CONDITION = 1e6;
+/** Roots closer than this (relative to their size) count as repeated. */
+const REPEATED = 1e-6;
+/** |p dv/dp| below this fraction of the value is rounding, not influence. */
+const NEGLIGIBLE = 1e-10;
+
+export interface SensitivityInput {
+  aircraftClass: AircraftClass;
+  condition: FlightCondition;
+  analysis: ModalAnalysis;
+  set: ResolvedCriteriaSet;
+  evaluation: ConditionEvaluation;
+  choice: SensitivityChoice;
+}
+
+/** The evaluation with `sensitivities` (or a `sensitivityNote`) on each chosen finding. */
+export function withSensitivities(input: SensitivityInput): ConditionEvaluation {
+  const { evaluation, choice } = input;
+  if (choice === 'none') return evaluation;
+  const chosen = evaluation.findings.map((f) => f.value !== null && f.verdict !== 'not_evaluated' && (choice === 'all' || f.verdict !== 'pass'));
+  if (!chosen.includes(true)) return evaluation;
+  const source = input.condition.written;
+  const slopes = source ? buildSlopes(input.condition) : null;
+  const findings = evaluation.findings.map((finding, index) => {
+    if (!chosen[index]) return finding;
+    if (slopes === null) return { ...finding, sensitivities: [], sensitivityNote: 'not computed: the condition as written is not at hand' };
+    return forFinding(input, finding, index, slopes);
+  });
+  return { ...evaluation, findings };
+}
+
+/** dA/dp and d(n/alpha)/dp for one written number. */
+interface BuildSlope {
+  path: NumberPath;
+  name: string;
+  current: number;
+  /** [SI per file's unit] */
+  dA: number[][];
+  nAlpha: number | null;
+}
+
+/** The build differentiated once per condition for every written number that moves A or n/alpha. */
+function buildSlopes(condition: FlightCondition): BuildSlope[] {
+  const source = condition.written!;
+  const out: BuildSlope[] = [];
+  for (const number of writtenNumbers(source)) {
+    // a number written as 0 has no normalised influence and no change "within double" of it
+    if (number.value === 0) continue;
+    const h = BUILD_STEP * Math.abs(number.value);
+    const up = rebuildWith(condition, source, number.path, number.value + h);
+    const down = rebuildWith(condition, source, number.path, number.value - h);
+    if (up === null || down === null || up.system.states.length !== condition.system.states.length) continue;
+    let moves = false;
+    const dA = up.system.A.map((row, i) =>
+      row.map((x, j) => {
+        const d = (x - down.system.A[i]![j]!) / (2 * h);
+        if (d !== 0) moves = true;
+        return d;
+      }),
+    );
+    const nUp = nOverAlpha(up).value;
+    const nDown = nOverAlpha(down).value;
+    const nAlpha = nUp !== null && nDown !== null ? (nUp - nDown) / (2 * h) : null;
+    if (!moves && !nAlpha) continue;
+    out.push({ path: number.path, name: number.name, current: number.value, dA, nAlpha });
+  }
+  return out;
+}
+
+function forFinding(input: SensitivityInput, finding: Finding, index: number, slopes: BuildSlope[]): Finding {
+  const { condition, analysis } = input;
+  if (!MODAL_QUANTITIES.has(finding.quantity)) {
+    return { ...finding, sensitivities: [], sensitivityNote: 'not computed: sensitivities cover the figures of the modes, not yet those of the responses' };
+  }
+  const zero = (mode: Mode) => mode.eigenvalues.map(() => ({ re: 0, im: 0 }));
+  const nAlphaNow = nOverAlpha(condition).value;
+  const nAlphaAt = (d: number | null): NAlphaSlope => (nAlphaNow === null ? null : { value: nAlphaNow, derivative: d ?? 0 });
+  // the mode this finding was made from: the one whose roots give its value
+  const mode = analysis.modes.find((m) => {
+    if (m.kind !== finding.mode) return false;
+    const v = figureSlope(finding.quantity, m.eigenvalues, zero(m), nAlphaAt(0))?.value;
+    return v !== undefined && Math.abs(v - finding.value!) <= 1e-9 * Math.max(1, Math.abs(v));
+  });
+  if (mode === undefined) return { ...finding, sensitivities: [], sensitivityNote: 'not computed: the value does not come from the roots of a mode alone' };
+
+  const roots = mode.eigenvalues;
+  const defect = defective(condition.system.A, roots, analysis);
+  if ('note' in defect) return { ...finding, sensitivities: [], sensitivityNote: defect.note };
+
+  const target = targetOf(input, finding);
+  if (target === null) return { ...finding, sensitivities: [], sensitivityNote: 'not computed: no boundary of the required level to move towards' };
+
+  const ranked: { slope: BuildSlope; derivative: number; influence: number }[] = [];
+  for (const slope of slopes) {
+    const changes: Complex[] = [];
+    for (const v of defect.vectors) {
+      // a pair's second root moves as the conjugate of the first
+      changes.push(v === null ? conjugate(changes[changes.length - 1]!) : eigenvalueChange(v, slope.dA));
+    }
+    const figure = figureSlope(finding.quantity, roots, changes, nAlphaAt(slope.nAlpha));
+    if (figure === null || !Number.isFinite(figure.derivative)) continue;
+    // a change of the value below rounding (a number that does not reach this mode) is no influence
+    const change = Math.abs(slope.current * figure.derivative);
+    if (!(change > NEGLIGIBLE * Math.max(Math.abs(figure.value), target.distance))) continue;
+    const influence = change / target.distance;
+    ranked.push({ slope, derivative: figure.derivative, influence });
+  }
+  ranked.sort((x, y) => y.influence - x.influence);
+
+  const sensitivities: Sensitivity[] = ranked.slice(0, TOP).map(({ slope, derivative, influence }) => {
+    const outcome = searchBoundary({
+      current: slope.current,
+      slope: target.side * derivative,
+      margin: finding.margin!,
+      target: target.margin,
+      beyond: finding.verdict !== 'pass',
+      tolerance: target.tolerance,
+      analyse: (value) => reanalyse(input, finding, index, slope.path, value),
+    });
+    const entry: Sensitivity = { parameter: slope.name, current: slope.current, derivative, influence, toBoundary: outcome.toBoundary };
+    if (outcome.toBoundary === null) entry.reason = outcome.reason;
+    return entry;
+  });
+  return sensitivities.length > 0
+    ? { ...finding, sensitivities }
+    : { ...finding, sensitivities, sensitivityNote: 'no number of the model moves this value' };
+}
+
+function conjugate(z: Complex): Complex {
+  return { re: z.re, im: -z.im };
+}
+
+/**
+ * The vectors of each root of the mode (null for a pair's conjugate root), or why the
+ * sensitivity is not defined: a repeated root, or one whose eigenvalue condition number marks
+ * it as nearly defective (its derivative grows without bound as the root becomes defective).
+ */
+function defective(
+  A: readonly (readonly number[])[],
+  roots: readonly Complex[],
+  analysis: ModalAnalysis,
+): { vectors: (RootVectors | null)[] } | { note: string } {
+  const all: Complex[] = analysis.modes.flatMap((m) => m.eigenvalues);
+  const vectors: (RootVectors | null)[] = [];
+  for (let k = 0; k < roots.length; k += 1) {
+    const root = roots[k]!;
+    if (root.im < 0) {
+      vectors.push(null);
+      continue;
+    }
+    const size = Math.hypot(root.re, root.im);
+    const close = all.filter((z) => Math.hypot(z.re - root.re, z.im - root.im) <= REPEATED * Math.max(size, 1e-12));
+    // the root itself is among them once
+    if (close.length > 1) return { note: `not defined: the root ${show(root)} is repeated or nearly so (a defective mode has no derivative)` };
+    const v = rootVectors(A, root);
+    if (!(v.conditionNumber <= DEFECTIVE_CONDITION)) {
+      return { note: `not defined: the root ${show(root)} is nearly defective (eigenvalue condition number ${v.conditionNumber.toExponential(1)} > ${DEFECTIVE_CONDITION.toExponential(0)})` };
+    }
+    vectors.push(v);
+  }
+  return { vectors };
+}
+
+interface Target {
+  /** +1: the governing boundary is a minimum (margin = value - min), -1: a maximum */
+  side: 1 | -1;
+  /** margin to reach */
+  margin: number;
+  /** [unit of the quantity] |margin now - target| (> 0) */
+  distance: number;
+  tolerance: number;
+}
+
+/** Where the finding should go: a failing or passing one to the boundary of the required level, a marginal one out of the band. */
+function targetOf({ set, evaluation }: SensitivityInput, finding: Finding): Target | null {
+  const { margin, value } = finding;
+  if (margin === null || value === null) return null;
+  const bound = finding.bounds[String(evaluation.requiredLevel) as '1' | '2' | '3'];
+  if (bound === undefined) return null;
+  const fromMin = bound.min !== undefined ? value - bound.min : undefined;
+  const fromMax = bound.max !== undefined ? bound.max - value : undefined;
+  const side: 1 | -1 = fromMin !== undefined && Math.abs(fromMin - margin) <= 1e-12 * Math.max(1, Math.abs(margin)) ? 1 : -1;
+  if (side === -1 && fromMax === undefined) return null;
+  const boundary = side === 1 ? bound.min! : bound.max!;
+  const band = bandAround(boundary, { quantity: finding.quantity, band: set.marginalBand });
+  const goal = finding.verdict === 'marginal' ? band : 0;
+  const distance = Math.abs(goal - margin);
+  const scale = band > 0 ? band : Math.max(Math.abs(boundary), Math.abs(value), 1e-9) * 0.1;
+  return { side, margin: goal, distance: distance > 0 ? distance : scale * 1e-9, tolerance: 0.01 * scale };
+}
+
+/** The finding again, with the number at `path` set to `value`: rebuild, analyse, evaluate. */
+function reanalyse(input: SensitivityInput, finding: Finding, index: number, path: NumberPath, value: number): Trial | null {
+  const { condition, set, aircraftClass, evaluation } = input;
+  const rebuilt = rebuildWith(condition, condition.written!, path, value);
+  if (rebuilt === null) return null;
+  let analysis: ModalAnalysis;
+  let again: ConditionEvaluation;
+  try {
+    analysis = analyseModes(rebuilt.system, { airspeed: rebuilt.airspeed });
+    again = evaluateCondition({ aircraftClass, condition: rebuilt, analysis, set });
+  } catch (err) {
+    if (err instanceof InternalError) return null;
+    throw err;
+  }
+  // the same criterion on the same mode kind, the same one of them when there are several
+  const same = (f: Finding) => f.criterion === finding.criterion && f.set === finding.set && f.mode === finding.mode;
+  const ordinal = evaluation.findings.slice(0, index).filter(same).length;
+  const match = again.findings.filter(same)[ordinal];
+  if (match === undefined || match.value === null || match.margin === null || match.verdict === 'not_evaluated') return null;
+  return { value: match.value, margin: match.margin, level: match.level, verdict: match.verdict };
+}
+
+function show(z: Complex): string {
+  return z.im === 0 ? z.re.toPrecision(4) : `${z.re.toPrecision(4)} ${z.im < 0 ? '-' : '+'} ${Math.abs(z.im).toPrecision(4)}i`;
+}
