@@ -13,7 +13,7 @@ import { hasIssue } from './report/condition-status.js';
 import { INDENT_UP_TO_CONDITIONS } from './report/json.js';
 import { ResultsJsonFile } from './report/results-json-file.js';
 import { JunitFile } from './report/junit-file.js';
-import type { ConditionResult, ResultsHead } from './types.js';
+import type { ConditionResult, ResultsHead, SensitivityChoice } from './types.js';
 import { InputError } from './errors.js';
 import { loadCriteriaSet } from './load/criteria-file.js';
 import { BASELINE_LIMIT_BYTES, readInputFile } from './load/read-file.js';
@@ -73,6 +73,11 @@ export async function main(argv: string[], io: Io = defaultIo()): Promise<number
     .option('--browser <path>', 'Chromium or Chrome executable for the PDF')
     .option('--trust-folder <folder>', 'a folder besides the model\'s own whose files the model may name (repeatable)', collect)
     .addOption(new Option('--detail <which>', 'per-condition detail: all, issues (conditions with a fail, marginal or not-evaluated finding) or none').choices(['all', 'issues', 'none']))
+    .addOption(
+      new Option('--sensitivities <which>', 'design sensitivities (what would move a finding): issues (failing and marginal findings), all or none')
+        .choices(['issues', 'all', 'none'])
+        .default('issues'),
+    )
     .action(async (modelPath: string, opts: CheckCommandOptions) => {
       exitCode = await checkCommand(modelPath, opts, argv, io);
     });
@@ -155,6 +160,7 @@ interface CheckCommandOptions {
   browser?: string;
   detail?: 'all' | 'issues' | 'none';
   trustFolder?: string[];
+  sensitivities: SensitivityChoice;
 }
 
 async function checkCommand(modelPath: string, opts: CheckCommandOptions, argv: string[], io: Io): Promise<number> {
@@ -191,6 +197,7 @@ async function checkCommand(modelPath: string, opts: CheckCommandOptions, argv: 
       trustedFolders: opts.trustFolder ?? [],
       ...runContext(argv, io),
       ...(opts.modeShapes ? { modeShapes: true } : {}),
+      sensitivities: opts.sensitivities,
       onProgress: progress.onProgress,
       onStart: (head: ResultsHead, total: number) => {
         checkOutputsAreNotInputs(outputs, [...head.inputs, ...baselineInput]);

@@ -15,6 +15,10 @@ export const STANDING_CAUTIONS: readonly string[] = [
   'The military boundaries apply to equivalent-system figures. Where a flight control system adds ' +
     'dynamics of its own, the modes should first be matched by a low-order equivalent system; the raw ' +
     'eigenvalues of an augmented model may not be the figures the boundaries were drawn for.',
+  'The \u201cwhat would move it\u201d tables change one number of the model at a time. They are a ' +
+    'linearised design aid: in a real airframe the derivatives are coupled (a change of geometry, mass ' +
+    'or inertia moves many of them at once), so a change found here points where to look; it is not a ' +
+    'design change, and the whole model must be re-derived and checked again.',
   'Each boundary carries the class of its evidence. Only \u201cpublished\u201d boundaries were read in the primary ' +
     'document; \u201csecondary\u201d ones were read in a reproduction, \u201cconflicting\u201d ones have sources that ' +
     'disagree, \u201cmemory\u201d ones were recalled and \u201cprogramme-set\u201d ones were chosen by the programme. ' +

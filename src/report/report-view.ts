@@ -67,6 +67,24 @@ export interface FindingRow {
   /** why this verdict: filled for every verdict but a pass (whose level column says it) */
   reason: string;
   method: string | null;
+  /** what would move it: one number at a time (findings given sensitivities only) */
+  moves: MovesView | null;
+}
+
+export interface MovesView {
+  /** what the changes aim at */
+  target: string;
+  rows: { parameter: string; now: string; needed: string; change: string; estimate: string; reached: string; verified: boolean }[];
+  /** why there are no rows (e.g. a nearly defective mode) */
+  note: string | null;
+}
+
+export interface DecidingNumberRow {
+  number: string;
+  leadsFail: number;
+  leadsMarginal: number;
+  inTopFive: number;
+  reachesAlone: number;
 }
 
 export interface ConditionView {
@@ -195,6 +213,8 @@ export interface EnvelopeView {
   trends: ChartView[];
   /** how the trend charts were drawn (axes, boundaries, merged points) */
   trendNote: string;
+  /** the numbers that most often lead failing and marginal findings (empty without sensitivities) */
+  deciding: DecidingNumberRow[];
 }
 
 // ------------------------------------------------------------------ baseline comparison

@@ -12,6 +12,7 @@ import { MODE_TEXT, QUANTITY_TEXT } from './labels.js';
 import { levelReachedWords, modeLevel, modeLevelWords } from './mode-levels.js';
 import { textTable } from './text-table.js';
 import { visibleData } from '../visible-text.js';
+import { decidingNumbers, moveRows, moveTarget } from './what-would-move.js';
 
 export interface TerminalOptions {
   color: boolean;
@@ -70,6 +71,7 @@ export function formatResultsText(written: Results, options: TerminalOptions): s
       const issues = { ...c, findings: c.findings.filter((f) => f.verdict !== 'pass') };
       out.push(indent(findingsTable(issues, (v, t) => paint(VERDICT_COLOR[v], t))));
       out.push(...defaultLines(c));
+      out.push(...moveBlocks(issues.findings));
       continue;
     }
     for (const n of c.notes) out.push(`  note: ${n}`);
@@ -78,6 +80,7 @@ export function formatResultsText(written: Results, options: TerminalOptions): s
       if (c.findings.length === 0) out.push('  (no criterion applies to this condition)');
       else out.push(indent(findingsTable(c, (v, t) => paint(VERDICT_COLOR[v], t))));
       out.push(...defaultLines(c));
+      out.push(...moveBlocks(c.findings));
       for (const n of c.notApplicable) out.push(`  not applicable: ${n.criterion} (${n.source}): ${n.reason}`);
     }
     for (const w of c.warnings) out.push(paint('\u001b[33m', `  warning: ${w}`));
@@ -92,6 +95,7 @@ export function formatResultsText(written: Results, options: TerminalOptions): s
       `${total - shown.length} of ${total} conditions not listed (detail: ${options.detail}${options.detail === 'issues' ? ': only conditions with a fail, marginal or not-evaluated finding' : ''}).`,
     );
   }
+  if (options.findings && total > 1) out.push(...decidingLines(results.conditions, total));
   if (options.findings) {
     const s = results.summary;
     out.push('');
@@ -101,6 +105,68 @@ export function formatResultsText(written: Results, options: TerminalOptions): s
     );
   }
   return out.join('\n');
+}
+
+/** Under the findings: per finding with sensitivities, what would move it (one number at a time). */
+function moveBlocks(findings: readonly Finding[]): string[] {
+  const out: string[] = [];
+  for (const f of findings) {
+    if (f.sensitivities === undefined) continue;
+    out.push(`  what would move ${f.criterion} (${MODE_TEXT[f.mode]} ${QUANTITY_TEXT[f.quantity]} ${valueText(f)}): ${moveTarget(f)}`);
+    if (f.sensitivities.length === 0) {
+      out.push(`    ${f.sensitivityNote ?? 'no number of the model moves this value'}`);
+      continue;
+    }
+    const rows = moveRows(f).map((r) => [
+      r.parameter,
+      formatSig(r.now, 4),
+      formatSig(r.needed, 4),
+      r.change === null ? '-' : `${formatSig(r.change, 3)} (x${formatSig(r.ratio, 3)})`,
+      formatSig(r.estimate, 3),
+      r.reached,
+    ]);
+    out.push(
+      indent(
+        indent(
+          textTable(
+            [
+              { header: 'number (as written)' },
+              { header: 'now', align: 'right' },
+              { header: 'needed', align: 'right' },
+              { header: 'change', align: 'right' },
+              { header: 'linear est.', align: 'right' },
+              { header: 'reached when verified' },
+            ],
+            rows,
+          ),
+        ),
+      ),
+    );
+  }
+  return out;
+}
+
+/** Over a sweep: the numbers that lead the failing and marginal findings most often. */
+function decidingLines(conditions: readonly ConditionResult[], total: number): string[] {
+  const deciding = visibleData(decidingNumbers(conditions));
+  if (deciding.length === 0) return [];
+  const listedNote = conditions.length < total ? ` (over the ${conditions.length} conditions listed)` : '';
+  return [
+    '',
+    `numbers that most often decide failing and marginal findings${listedNote}:`,
+    indent(
+      textTable(
+        [
+          { header: 'number' },
+          { header: 'leads fail', align: 'right' },
+          { header: 'leads marginal', align: 'right' },
+          { header: 'in top five', align: 'right' },
+          { header: 'fixes alone', align: 'right' },
+        ],
+        deciding.map((d) => [d.number, String(d.leadsFail), String(d.leadsMarginal), String(d.inTopFive), String(d.reachesAlone)]),
+      ),
+    ),
+  ];
 }
 
 function showCondition(c: ConditionResult, detail: TerminalOptions['detail']): boolean {

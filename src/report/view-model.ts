@@ -21,13 +21,14 @@ import { shortPeriodChart } from './charts/short-period-chart.js';
 import { safeId } from './charts/svg-kit.js';
 import { categoryLabel, classLabel, MODE_LABEL, QUANTITY_LABEL, QUANTITY_UNIT } from './labels.js';
 import type {
-  ChartView, ConditionView, CriteriaSetView, EvidenceSummaryView, FindingRow, ModeRow, OverviewView, ReportView, SourceView, VerdictTally,
+  ChartView, ConditionView, CriteriaSetView, EvidenceSummaryView, FindingRow, ModeRow, MovesView, OverviewView, ReportView, SourceView, VerdictTally,
 } from './report-view.js';
 import { VERDICT_ORDER, verdictMark, worstVerdict } from './verdict-marks.js';
 import { boundText, dateText, eigenvalueText, levelBoundsText, lengthText, mathText, NONE, sig, signedSig, unitText, withUnit } from './view-format.js';
 import { isRealMode, modeStability, type Stability } from '../modes/stability.js';
 import { defaultsBehind } from './finding-defaults.js';
 import { isSingleRequirement, levelReachedWords, modeLevel, modeLevelWords } from './mode-levels.js';
+import { moveRows, moveTarget } from './what-would-move.js';
 
 export interface ReportViewOptions {
   reportId: string;
@@ -114,7 +115,22 @@ function findingRow(f: Finding, c: ConditionResult, showSet: boolean): FindingRo
     // a pass says no more than its level column; any other verdict says why
     reason: f.verdict === 'pass' ? '' : mathText(f.reason),
     method: f.method === undefined ? null : mathText(f.method),
+    moves: movesView(f),
   };
+}
+
+function movesView(f: Finding): MovesView | null {
+  if (f.sensitivities === undefined) return null;
+  const rows = moveRows(f).map((r) => ({
+    parameter: r.parameter,
+    now: sig(r.now, 4),
+    needed: r.needed === null ? NONE : sig(r.needed, 4),
+    change: r.change === null ? NONE : `${signedSig(r.change)} (\u00d7${sig(r.ratio)})`,
+    estimate: r.estimate === null ? NONE : signedSig(r.estimate),
+    reached: r.reached,
+    verified: r.needed !== null,
+  }));
+  return { target: moveTarget(f), rows, note: rows.length === 0 ? (f.sensitivityNote ?? 'no number of the model moves this value') : null };
 }
 
 function charts(c: ConditionResult): ChartView[] {

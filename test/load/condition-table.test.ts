@@ -18,8 +18,9 @@ function fromTable(modelName: string, tableName: string): AircraftModel {
   return parseModel(read(modelName), `${dir}/${modelName}`, { [tableName]: { path: `${dir}/${tableName}`, text: read(tableName) } });
 }
 
-function withoutPlace(c: FlightCondition): Omit<FlightCondition, 'place'> {
-  const { place: _, ...rest } = c;
+/** The built condition without its place and its written form (which names each number where it was written). */
+function withoutPlace(c: FlightCondition): Omit<FlightCondition, 'place' | 'written'> {
+  const { place: _, written: _written, ...rest } = c;
   return rest;
 }
 

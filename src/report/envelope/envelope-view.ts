@@ -9,6 +9,7 @@ import { criterionColumns } from './criterion-columns.js';
 import { envelopeTrends } from './trends.js';
 import { verdictMatrix } from './verdict-matrix.js';
 import { worstCases } from './worst-cases.js';
+import { decidingNumbers } from '../what-would-move.js';
 
 export function envelopeView(
   conditions: readonly ConditionResult[],
@@ -25,5 +26,6 @@ export function envelopeView(
     trendNote:
       'One mark per condition, its shape the verdict of the findings on that figure (the worst, where several criteria judge it). ' +
       'A boundary line is drawn only where one Level 1 bound holds for every condition; the hatched side is outside Level 1.',
+    deciding: decidingNumbers(conditions),
   };
 }
