@@ -18,7 +18,7 @@ export type Figure = { value: number; method: string } | { value: null; reason: 
  * - n/alpha = -V A[alpha,alpha] / g with an `alpha` state (A[alpha,alpha] ~ Z_w as well);
  * - n/alpha = q S CL_alpha / W from lift data (the lift change per alpha over the weight).
  */
-export function nOverAlpha(condition: FlightCondition): Figure {
+export function nOverAlpha(condition: Pick<FlightCondition, 'nAlpha' | 'system' | 'airspeed' | 'liftData'>): Figure {
   if (condition.nAlpha !== null) return { value: condition.nAlpha, method: 'n/alpha given in the model file' };
   const { states, A } = condition.system;
   for (const state of ['w', 'alpha'] as const) {

@@ -95,7 +95,8 @@ export function formatResultsText(written: Results, options: TerminalOptions): s
       `${total - shown.length} of ${total} conditions not listed (detail: ${options.detail}${options.detail === 'issues' ? ': only conditions with a fail, marginal or not-evaluated finding' : ''}).`,
     );
   }
-  if (options.findings && total > 1) out.push(...decidingLines(results.conditions, total));
+  // every failing or marginal condition is kept even where a sweep keeps only some (see runCheck's keep)
+  if (options.findings && total > 1 && options.detail !== 'none') out.push(...decidingLines(results.conditions));
   if (options.findings) {
     const s = results.summary;
     out.push('');
@@ -147,13 +148,12 @@ function moveBlocks(findings: readonly Finding[]): string[] {
 }
 
 /** Over a sweep: the numbers that lead the failing and marginal findings most often. */
-function decidingLines(conditions: readonly ConditionResult[], total: number): string[] {
+function decidingLines(conditions: readonly ConditionResult[]): string[] {
   const deciding = visibleData(decidingNumbers(conditions));
   if (deciding.length === 0) return [];
-  const listedNote = conditions.length < total ? ` (over the ${conditions.length} conditions listed)` : '';
   return [
     '',
-    `numbers that most often decide failing and marginal findings${listedNote}:`,
+    'numbers that most often decide failing and marginal findings:',
     indent(
       textTable(
         [

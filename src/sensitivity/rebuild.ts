@@ -8,15 +8,21 @@ import type { WrittenCondition } from '../load/model-schema.js';
 import type { FlightCondition, WrittenSource } from '../types.js';
 import { withNumber, type NumberPath } from './written-numbers.js';
 
-/** The condition with the number at `path` set to `value`; null when that no longer builds (e.g. a mass of 0). */
-export function rebuildWith(original: FlightCondition, source: WrittenSource, path: NumberPath, value: number): FlightCondition | null {
+/** The built condition with the number at `path` set to `value`; null when that no longer builds (e.g. a mass of 0). */
+export function rebuiltWith(source: WrittenSource, path: NumberPath, value: number): BuiltCondition | null {
   const written = withNumber(source.condition, path, value) as WrittenCondition;
   const built = buildCondition(written, source, []);
-  if (!built.ok) return null;
-  return placed(built.value, original);
+  return built.ok ? built.value : null;
 }
 
-/** A rebuilt condition keeps the original's place (looked up only if an error needs it). */
-function placed(built: BuiltCondition, original: FlightCondition): FlightCondition {
-  return Object.defineProperty(built, 'place', { enumerable: true, configurable: true, get: () => original.place }) as FlightCondition;
+/** The same, as a flight condition that keeps the original's place (looked up only if an error needs it). */
+export function rebuildWith(original: FlightCondition, source: WrittenSource, path: NumberPath, value: number): FlightCondition | null {
+  const built = rebuiltWith(source, path, value);
+  if (built === null) return null;
+  return {
+    ...built,
+    get place() {
+      return original.place;
+    },
+  };
 }

@@ -1,9 +1,10 @@
 /**
  * The change of one number alone that takes a finding to its target (the boundary of the
  * required level; for a marginal finding, the edge of the marginal band): first the linear
- * estimate from the derivative, then a one-dimensional root find (bracket, then the Illinois
- * variant of regula falsi; Dowell and Jarratt, BIT 11, 1971) on the model re-analysed at each
- * trial value. The number may move between zero (no sign change) and twice its value; a
+ * estimate from the derivative, then a one-dimensional root find on the model re-analysed at
+ * each trial value: secant steps aimed a little beyond the target, and once the target is
+ * bracketed the Illinois variant of regula falsi (Dowell and Jarratt, BIT 11, 1971), which
+ * keeps the bracket. The number may move between zero (no sign change) and twice its value; a
  * target outside that range is "not reachable by this parameter alone". Pure.
  */
 import type { Level, ToBoundary, Verdict } from '../types.js';
@@ -40,84 +41,77 @@ export type BoundaryOutcome = { toBoundary: ToBoundary } | { toBoundary: null; r
 const SMALLEST_RATIO = 1e-3;
 /** Largest ratio tried: beyond it the change "more than doubles" the number. */
 const LARGEST_RATIO = 2;
-const MAX_STEPS = 40;
-
-export function searchBoundary(search: BoundarySearch): BoundaryOutcome {
-  const { current, slope, margin, target, analyse } = search;
-  const estimate = (target - margin) / slope;
-  if (!Number.isFinite(estimate)) return { toBoundary: null, reason: 'the value does not change with this number (to first order)' };
-  // g < 0 short of the target, g >= 0 at or beyond it
-  const towards = Math.sign(target - margin) || 1;
-  const g = (trial: Trial) => towards * (trial.margin - target);
-  const ratioWanted = 1 + estimate / current;
-  const ratioEnd = ratioWanted > 1 ? LARGEST_RATIO : SMALLEST_RATIO;
-  const endValue = current * ratioEnd;
-
-  // bracket: the linear estimate first, then on towards the end of the range
-  let a: Point = { at: current, g: towards * (margin - target), trial: null };
-  let found: Point | undefined;
-  const tries: number[] = [];
-  if (ratioWanted > SMALLEST_RATIO && ratioWanted < LARGEST_RATIO) {
-    const first = current + estimate;
-    tries.push(first, first + 0.5 * (endValue - first), endValue);
-  } else {
-    tries.push(endValue);
-  }
-  for (const at of tries) {
-    const trial = analyse(at);
-    if (trial === null) return { toBoundary: null, reason: `the finding has no value when the number is ${fmt(at)} (the mode is no longer identified)` };
-    const point: Point = { at, g: g(trial), trial };
-    if (point.g >= 0) {
-      found = point;
-      break;
-    }
-    a = point;
-  }
-  if (found === undefined) {
-    const need = current + estimate;
-    const why = need * current <= 0 ? 'a change of sign' : 'more than twice the number';
-    return {
-      toBoundary: null,
-      reason: `not reachable by this parameter alone: the linear estimate needs ${fmt(need)} (${why}), and at ${fmt(endValue)} the value is still ${fmt(a.trial?.value ?? NaN)}`,
-    };
-  }
-
-  // Illinois: regula falsi that halves the stale end's g, so both ends close in
-  let b: Point = found;
-  let side = 0;
-  // stop when the end that will be returned is close enough (the start itself never is)
-  const settled = () => (search.beyond || a.trial === null ? b.g <= search.tolerance : -a.g <= search.tolerance);
-  for (let step = 0; step < MAX_STEPS && !settled(); step += 1) {
-    const at: number = b.at - (b.g * (b.at - a.at)) / (b.g - a.g);
-    if (!(Math.abs(at - a.at) > 0 && Math.abs(at - b.at) > 0)) break;
-    const trial = analyse(at);
-    if (trial === null) break;
-    const point: Point = { at, g: g(trial), trial };
-    if (point.g >= 0) {
-      b = point;
-      if (side === 1) a = { ...a, g: a.g / 2 };
-      side = 1;
-    } else {
-      a = point;
-      if (side === -1) b = { ...b, g: b.g / 2 };
-      side = -1;
-    }
-  }
-  // the end on the side asked for; the start itself is never an answer
-  const end = search.beyond || a.trial === null ? b : a;
-  const trial = end.trial!;
-  return {
-    toBoundary: { change: end.at - current, estimate, verifiedValue: trial.value, verifiedLevel: trial.level, verifiedVerdict: trial.verdict },
-  };
-}
+/** Re-analyses at most, per number. */
+const MAX_TRIALS = 24;
 
 interface Point {
   /** [file's unit] value of the number */
   at: number;
-  /** distance to the target, negative short of it */
+  /** distance to the target, negative short of it, >= 0 at or beyond it */
   g: number;
   /** null for the starting point (its values are the finding's own) */
   trial: Trial | null;
+}
+
+export function searchBoundary(search: BoundarySearch): BoundaryOutcome {
+  const { current, slope, margin, target, tolerance, analyse } = search;
+  const estimate = (target - margin) / slope;
+  if (!Number.isFinite(estimate)) return { toBoundary: null, reason: 'the value does not change with this number (to first order)' };
+  const towards = Math.sign(target - margin) || 1;
+  const lowEnd = Math.min(current * SMALLEST_RATIO, current * LARGEST_RATIO);
+  const highEnd = Math.max(current * SMALLEST_RATIO, current * LARGEST_RATIO);
+  const clamp = (x: number) => Math.min(highEnd, Math.max(lowEnd, x));
+  const settled = (p: Point) => (search.beyond ? p.g >= 0 && p.g <= tolerance : p.g < 0 && -p.g <= tolerance);
+  const answer = (p: Point): BoundaryOutcome => ({
+    toBoundary: { change: p.at - current, estimate, verifiedValue: p.trial!.value, verifiedLevel: p.trial!.level, verifiedVerdict: p.trial!.verdict },
+  });
+  const unreachable = (last: Point): BoundaryOutcome => {
+    const need = current + estimate;
+    const why = need * current <= 0 ? 'a change of sign' : 'more than twice the number';
+    const shown = last.trial ? `, and at ${fmt(last.at)} the value is still ${fmt(last.trial.value)}` : '';
+    return { toBoundary: null, reason: `not reachable by this parameter alone: the linear estimate needs ${fmt(need)} (${why})${shown}` };
+  };
+
+  // g of the point aimed at: half a tolerance beyond the target (or short of it, for a
+  // passing finding), so that the first trial on the right side is most often close enough
+  const gAim = (search.beyond ? 0.5 : -0.5) * tolerance;
+  const direction = Math.sign(estimate);
+  let short: Point = { at: current, g: towards * (margin - target), trial: null };
+  let past: Point | undefined;
+  let previous: Point = short;
+  let next = clamp(current + (target + towards * gAim - margin) / slope);
+  let side = 0;
+  for (let n = 0; n < MAX_TRIALS; n += 1) {
+    const trial = analyse(next);
+    if (trial === null) return { toBoundary: null, reason: `the finding has no value when the number is ${fmt(next)} (the mode is no longer identified)` };
+    const point: Point = { at: next, g: towards * (trial.margin - target), trial };
+    if (settled(point)) return answer(point);
+    if (point.g >= 0) {
+      if (past !== undefined && side === 1) short = { ...short, g: short.g / 2 };
+      past = point;
+      side = 1;
+    } else {
+      if (past !== undefined && side === -1) past = { ...past, g: past.g / 2 };
+      short = point;
+      side = -1;
+    }
+    if (past === undefined) {
+      // not bracketed yet: a secant step from the last two points, on within the range
+      if (point.at === highEnd || point.at === lowEnd) return unreachable(point);
+      const secant = (point.g - previous.g) / (point.at - previous.at);
+      const useful = Number.isFinite(secant) && secant * direction > 0;
+      next = clamp(useful ? point.at + (gAim - point.g) / secant : point.at + (point.at - current));
+      previous = point;
+      continue;
+    }
+    // bracketed: an Illinois step between the two ends
+    const at = past.at - ((past.g - gAim) * (past.at - short.at)) / (past.g - short.g);
+    if (!(Math.abs(at - short.at) > 0 && Math.abs(at - past.at) > 0)) break;
+    next = at;
+  }
+  // the trials ran out: the end on the side asked for
+  const end = search.beyond || short.trial === null ? past : short;
+  return end === undefined ? unreachable(short) : answer(end);
 }
 
 function fmt(x: number): string {

@@ -57,10 +57,11 @@ describe('the change to the boundary, verified by re-analysis', () => {
               if (finding.verdict === 'fail') {
                 expect(moved.verdict).toBe('marginal');
                 expect(moved.margin!).toBeGreaterThanOrEqual(0);
-                expect(moved.margin!).toBeLessThanOrEqual(0.02 * band);
+                // within the marginal band, and within 5 % of its width of the boundary
+                expect(moved.margin!).toBeLessThanOrEqual(0.05 * band);
               } else {
                 expect(moved.verdict).toBe('pass');
-                expect(moved.margin! - band).toBeLessThanOrEqual(0.02 * band);
+                expect(moved.margin! - band).toBeLessThanOrEqual(0.05 * band);
               }
               // the change stays within the number's own sign and at most doubles it
               const ratio = (s.current + s.toBoundary.change) / s.current;
@@ -96,12 +97,19 @@ describe('the change to the boundary, verified by re-analysis', () => {
     const nr = finding.sensitivities!.find((s) => s.parameter === 'conditions[0].stateSpace.A[1][1]')!;
     expect(nr.derivative).toBeCloseTo(-1 / (2 * W) + ((a + d) * a) / (4 * W ** 3), 9);
     // zeta(x) = z: (a + x)^2 = 4 z^2 (a x - b c), a quadratic in x; the root below d
-    const z = 0.08;
-    const [qb, qc] = [2 * a - 4 * z * z * a, a * a + 4 * z * z * b * c];
-    const x = (-qb - Math.sqrt(qb * qb - 4 * qc)) / 2;
-    expect(nr.toBoundary!.change).toBeCloseTo(x - d, 4);
-    expect(nr.toBoundary!.verifiedVerdict).toBe('marginal');
-    expect(nr.toBoundary!.verifiedValue).toBeCloseTo(z, 4);
+    const dFor = (z: number) => {
+      const [qb, qc] = [2 * a - 4 * z * z * a, a * a + 4 * z * z * b * c];
+      return (-qb - Math.sqrt(qb * qb - 4 * qc)) / 2;
+    };
+    // the boundary 0.08, and 5 % of the marginal band (10 % of 0.08) beyond it
+    const [z0, z1] = [0.08, 0.08 + 0.05 * 0.008];
+    const t = nr.toBoundary!;
+    expect(t.verifiedVerdict).toBe('marginal');
+    expect(t.verifiedValue).toBeGreaterThanOrEqual(z0);
+    expect(t.verifiedValue).toBeLessThanOrEqual(z1);
+    expect(d + t.change).toBeCloseTo(dFor(t.verifiedValue), 9);
+    expect(d + t.change).toBeLessThanOrEqual(dFor(z0));
+    expect(d + t.change).toBeGreaterThanOrEqual(dFor(z1));
   });
 });
 
