@@ -7,7 +7,9 @@
  * root-vectors.ts), where dA/dp is taken through the pure model build (rebuild.ts) by a
  * central difference: the build is a rational function of each written number, exact or
  * nearly so to first order, while the eigen-analysis, which is not, is differentiated
- * analytically. Pure: no file, clock or randomness.
+ * analytically. A boundary that itself moves with the model (the omega_n^2 |phi/beta| rise of
+ * MIL-F-8785C 3.3.1.1) is held where it is for the ranking; the re-analysis sees it move.
+ * Pure: no file, clock or randomness.
  */
 import { nOverAlpha } from '../criteria/derived-figures.js';
 import { evaluateCondition, type ConditionEvaluation } from '../criteria/evaluate.js';
@@ -29,7 +31,7 @@ import type {
 } from '../types.js';
 import { figureSlope, MODAL_QUANTITIES, type NAlphaSlope } from './figure-slope.js';
 import { rebuildWith, rebuiltWith } from './rebuild.js';
-import { eigenvalueChange, rootVectors, type RootVectors } from './root-vectors.js';
+import { eigenvalueChange, rootVectors, type RootVectors, type SparseEntry } from './root-vectors.js';
 import { searchBoundary, type Trial } from './to-boundary.js';
 import { writtenNumbers, type NumberPath } from './written-numbers.js';
 
@@ -61,10 +63,12 @@ export function withSensitivities(input: SensitivityInput): ConditionEvaluation 
   if (!chosen.includes(true)) return evaluation;
   const source = input.condition.written;
   const slopes = source ? buildSlopes(input.condition) : null;
+  // several criteria look at one mode: its vectors are found once
+  const vectorsOf = new Map<Mode, ReturnType<typeof defective>>();
   const findings = evaluation.findings.map((finding, index) => {
     if (!chosen[index]) return finding;
     if (slopes === null) return { ...finding, sensitivities: [], sensitivityNote: 'not computed: the condition as written is not at hand' };
-    return forFinding(input, finding, index, slopes);
+    return forFinding(input, finding, index, slopes, vectorsOf);
   });
   return { ...evaluation, findings };
 }
@@ -74,8 +78,8 @@ interface BuildSlope {
   path: NumberPath;
   name: string;
   current: number;
-  /** [SI per file's unit] */
-  dA: number[][];
+  /** [SI per file's unit] the entries of dA/dp that are not 0 (a state-space entry has one) */
+  dA: SparseEntry[];
   nAlpha: number | null;
 }
 
@@ -87,27 +91,45 @@ function buildSlopes(condition: FlightCondition): BuildSlope[] {
     // a number written as 0 has no normalised influence and no change "within double" of it
     if (number.value === 0) continue;
     const h = BUILD_STEP * Math.abs(number.value);
+    // the build is linear in a state-space entry (shape checks, unit scaling, placement), so a
+    // one-sided difference is exact there; elsewhere it is central
+    const linear = isStateSpaceEntry(number.path);
     const up = rebuiltWith(source, number.path, number.value + h);
-    const down = rebuiltWith(source, number.path, number.value - h);
+    const down = linear ? { system: condition.system, nAlpha: condition.nAlpha, airspeed: condition.airspeed, liftData: condition.liftData } : rebuiltWith(source, number.path, number.value - h);
     if (up === null || down === null || up.system.states.length !== condition.system.states.length) continue;
-    let moves = false;
-    const dA = up.system.A.map((row, i) =>
-      row.map((x, j) => {
-        const d = (x - down.system.A[i]![j]!) / (2 * h);
-        if (d !== 0) moves = true;
-        return d;
-      }),
-    );
+    const span = linear ? h : 2 * h;
+    const dA: SparseEntry[] = [];
+    const n = up.system.A.length;
+    for (let i = 0; i < n; i += 1) {
+      const rowUp = up.system.A[i]!;
+      const rowDown = down.system.A[i]!;
+      for (let j = 0; j < n; j += 1) {
+        const d = (rowUp[j]! - rowDown[j]!) / span;
+        if (d !== 0) dA.push({ i, j, d });
+      }
+    }
     const nUp = nOverAlpha(up).value;
     const nDown = nOverAlpha(down).value;
-    const nAlpha = nUp !== null && nDown !== null ? (nUp - nDown) / (2 * h) : null;
-    if (!moves && !nAlpha) continue;
+    const nAlpha = nUp !== null && nDown !== null ? (nUp - nDown) / span : null;
+    if (dA.length === 0 && !nAlpha) continue;
     out.push({ path: number.path, name: number.name, current: number.value, dA, nAlpha });
   }
   return out;
 }
 
-function forFinding(input: SensitivityInput, finding: Finding, index: number, slopes: BuildSlope[]): Finding {
+/** A number inside a state matrix as written: `stateSpace.A[i][j]`, at the top or in an axis. */
+function isStateSpaceEntry(path: NumberPath): boolean {
+  const k = path.length;
+  return k >= 4 && path[k - 4] === 'stateSpace' && path[k - 3] === 'A' && typeof path[k - 2] === 'number' && typeof path[k - 1] === 'number';
+}
+
+function forFinding(
+  input: SensitivityInput,
+  finding: Finding,
+  index: number,
+  slopes: BuildSlope[],
+  vectorsOf: Map<Mode, ReturnType<typeof defective>>,
+): Finding {
   const { condition, analysis } = input;
   if (!MODAL_QUANTITIES.has(finding.quantity)) {
     return { ...finding, sensitivities: [], sensitivityNote: 'not computed: sensitivities cover the figures of the modes, not yet those of the responses' };
@@ -124,7 +146,11 @@ function forFinding(input: SensitivityInput, finding: Finding, index: number, sl
   if (mode === undefined) return { ...finding, sensitivities: [], sensitivityNote: 'not computed: the value does not come from the roots of a mode alone' };
 
   const roots = mode.eigenvalues;
-  const defect = defective(condition.system.A, roots, analysis);
+  let defect = vectorsOf.get(mode);
+  if (defect === undefined) {
+    defect = defective(condition.system.A, roots, analysis);
+    vectorsOf.set(mode, defect);
+  }
   if ('note' in defect) return { ...finding, sensitivities: [], sensitivityNote: defect.note };
 
   const target = targetOf(input, finding);

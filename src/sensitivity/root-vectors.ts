@@ -51,25 +51,22 @@ export function rootVectors(A: readonly (readonly number[])[], lambda: Complex):
   return { xr, xi, yr, yi, dot: { re: dr, im: di }, conditionNumber };
 }
 
-/** d lambda = y^T dA x / (y^T x) for a real change dA of the state matrix. */
-export function eigenvalueChange(vectors: RootVectors, dA: readonly (readonly number[])[]): Complex {
+/** One entry of a real change of the state matrix: dA[i][j] = d. */
+export interface SparseEntry {
+  i: number;
+  j: number;
+  d: number;
+}
+
+/** d lambda = y^T dA x / (y^T x) for a real change dA of the state matrix, given by its entries that are not 0. */
+export function eigenvalueChange(vectors: RootVectors, dA: readonly SparseEntry[]): Complex {
   const { xr, xi, yr, yi, dot } = vectors;
-  const n = xr.length;
   let sr = 0;
   let si = 0;
-  for (let i = 0; i < n; i += 1) {
-    const row = dA[i]!;
-    // (dA x)_i
-    let ar = 0;
-    let ai = 0;
-    for (let j = 0; j < n; j += 1) {
-      const d = row[j]!;
-      if (d === 0) continue;
-      ar += d * xr[j]!;
-      ai += d * xi[j]!;
-    }
-    sr += yr[i]! * ar - yi[i]! * ai;
-    si += yr[i]! * ai + yi[i]! * ar;
+  for (const { i, j, d } of dA) {
+    // y_i d x_j
+    sr += d * (yr[i]! * xr[j]! - yi[i]! * xi[j]!);
+    si += d * (yr[i]! * xi[j]! + yi[i]! * xr[j]!);
   }
   const q = dot.re * dot.re + dot.im * dot.im;
   return { re: (sr * dot.re + si * dot.im) / q, im: (si * dot.re - sr * dot.im) / q };
