@@ -74,7 +74,10 @@ export interface FindingRow {
 export interface MovesView {
   /** what the changes aim at */
   target: string;
-  rows: { parameter: string; now: string; needed: string; change: string; estimate: string; reached: string; verified: boolean }[];
+  /** the part of every number's name the rows share (`conditions[3].`, `t.csv:14:`), shown once; '' when none */
+  prefix: string;
+  /** `parameter` is the name without the prefix; `fullName` the whole of it */
+  rows: { parameter: string; fullName: string; now: string; needed: string; change: string; estimate: string; reached: string; verified: boolean }[];
   /** why there are no rows (e.g. a nearly defective mode) */
   note: string | null;
 }

@@ -121,8 +121,12 @@ function findingRow(f: Finding, c: ConditionResult, showSet: boolean): FindingRo
 
 function movesView(f: Finding): MovesView | null {
   if (f.sensitivities === undefined) return null;
-  const rows = moveRows(f).map((r) => ({
-    parameter: r.parameter,
+  const all = moveRows(f);
+  const prefixes = all.map((r) => namePrefix(r.parameter));
+  const prefix = prefixes.length > 0 && prefixes.every((p) => p === prefixes[0]) ? prefixes[0]! : '';
+  const rows = all.map((r) => ({
+    parameter: r.parameter.slice(prefix.length),
+    fullName: r.parameter,
     now: sig(r.now, 4),
     needed: r.needed === null ? NONE : sig(r.needed, 4),
     change: r.change === null ? NONE : `${signedSig(r.change)} (\u00d7${sig(r.ratio)})`,
@@ -130,7 +134,12 @@ function movesView(f: Finding): MovesView | null {
     reached: r.reached,
     verified: r.needed !== null,
   }));
-  return { target: moveTarget(f), rows, note: rows.length === 0 ? (f.sensitivityNote ?? 'no number of the model moves this value') : null };
+  return { target: moveTarget(f), prefix, rows, note: rows.length === 0 ? (f.sensitivityNote ?? 'no number of the model moves this value') : null };
+}
+
+/** The condition's part of a number's name: `conditions[3].` of a model file, `t.csv:14:` of a table row. */
+function namePrefix(parameter: string): string {
+  return /^conditions\[\d+\]\./.exec(parameter)?.[0] ?? /^.+:\d+:(?=[^:]+$)/.exec(parameter)?.[0] ?? '';
 }
 
 function charts(c: ConditionResult): ChartView[] {

@@ -88,7 +88,9 @@ describe('shown under the finding', () => {
     const { fixture } = withMoves();
     const html = renderHtml(buildReportView(fixture.results, fixture.sets, { reportId: 'MG-MOVE' }));
     expect(html.match(/<tr class="moves-row">/g)).toHaveLength(2);
-    expect(html).toContain('<td class="mono">conditions[0].lateral.derivatives.Nr</td>');
+    // the condition's part of the name once in the head, the rest in the row, whole in its title
+    expect(html).toContain('in <span class="mono">conditions[0].</span>');
+    expect(html).toContain('<td class="mono number" title="conditions[0].lateral.derivatives.Nr">lateral.derivatives.Nr</td>');
     expect(html).toContain('class="unreached"');
     expect(html).toContain('not defined: the root -2.000 is repeated or nearly so');
     expect(html).toContain('linearised design aid');
