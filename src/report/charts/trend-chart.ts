@@ -96,6 +96,9 @@ function padded([lo, hi]: [number, number]): [number, number] {
   return [lo - pad, hi + pad];
 }
 
+/** Up to this many points each get a hover target naming its condition. */
+const HOVER_POINTS = 300;
+
 export function trendChart(spec: TrendChartSpec): TrendChartOutput {
   const id = safeId(`trend-${spec.id}`);
   const [xlo, xhi] = padded(extent(spec.points.map((p) => p.x)));
@@ -193,6 +196,15 @@ export function trendChart(spec: TrendChartSpec): TrendChartOutput {
       d.push(markPath(kind, mx, my));
     }
     parts.push(`<path class="marks marks-${kind}" data-count="${set.size}" d="${d.join('')}" ${markStyle(kind, dense)}/>`);
+  }
+  // Each point names its condition on hover (screen); a sweep too large for one element per
+  // point keeps the merged marks only, and the verdict matrix names its conditions.
+  if (spec.points.length <= HOVER_POINTS) {
+    parts.push('<g class="point-names">');
+    for (const p of spec.points) {
+      parts.push(`<circle cx="${px(x(p.x))}" cy="${px(y(p.y))}" r="4" fill="#fff" fill-opacity="0"><title>${esc(`${p.condition}: ${plain(p.y)} at ${plain(p.x)}`)}</title></circle>`);
+    }
+    parts.push('</g>');
   }
   parts.push('</g>');
   for (const l of lines) {

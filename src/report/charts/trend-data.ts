@@ -37,6 +37,8 @@ export interface TrendPoint {
   verdict: Verdict | null;
   /** Level 1 bound of the finding behind the verdict (null when none) */
   level1: Bound | null;
+  /** the condition the point is, named on hover */
+  condition: string;
 }
 
 export interface BoundaryUse {
@@ -89,9 +91,9 @@ export function trendSeries(conditions: readonly ConditionResult[], figure: KeyF
     const verdict = findings.length > 0 ? worstVerdict(findings.map((f) => f.verdict)) : null;
     const judged = findings.find((f) => f.verdict === verdict && f.bounds['1']);
     const level1 = judged?.bounds['1'] ?? null;
-    points.push({ x: c.airspeed, y, verdict, level1 });
+    points.push({ x: c.airspeed, y, verdict, level1, condition: c.id });
     if (c.altitude === null) altitudeMissing += 1;
-    else altitudePoints.push({ x: c.altitude, y, verdict, level1 });
+    else altitudePoints.push({ x: c.altitude, y, verdict, level1, condition: c.id });
   }
   return { points, missing, byAltitude: { points: altitudePoints, missing: altitudeMissing }, boundaries: [...boundaries.values()] };
 }
