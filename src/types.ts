@@ -223,6 +223,9 @@ export type Verdict = 'pass' | 'marginal' | 'fail' | 'not_evaluated';
  * - time_constant             [s] of a real root
  * - time_to_bank              [s] to change bank by `params.bankAngle` [rad] after a step of
  *                             full roll control (a response figure, evaluated with or without a roll mode)
+ * - equivalent_time_delay     [s] tau of the low-order equivalent system of the mode's axis
+ * - pitch_bandwidth           [rad/s] bandwidth of theta/Fes (the lesser of the gain and phase bandwidths)
+ * - pitch_phase_delay         [s] tau_p = -(Phi(2 w180) + 180 deg) / (57.3 x 2 w180)
  */
 export type Quantity =
   | 'damping_ratio'
@@ -231,7 +234,22 @@ export type Quantity =
   | 'damping_frequency_product'
   | 'time_to_double'
   | 'time_constant'
-  | 'time_to_bank';
+  | 'time_to_bank'
+  | 'equivalent_time_delay'
+  | 'pitch_bandwidth'
+  | 'pitch_phase_delay';
+
+/**
+ * Level regions in the plane of two quantities (x = the criterion's quantity, y = `against`),
+ * each a closed polygon of [x, y] vertices in SI units; 'any' is the whole plane. A level left
+ * out holds the region of the next better level.
+ */
+export interface LevelRegions {
+  against: Quantity;
+  levels: Partial<Record<'1' | '2' | '3', [number, number][] | 'any'>>;
+  /** the figure of the document the polygons are taken from */
+  figure?: string;
+}
 
 /** Bounds of one level: min and/or max of the quantity (SI). */
 export interface Bound {
@@ -273,6 +291,13 @@ export interface Finding {
   sensitivities?: Sensitivity[];
   /** why a finding asked for has no sensitivities (e.g. a nearly defective mode) */
   sensitivityNote?: string;
+  /**
+   * where the figures came from when not the raw roots of the model: e.g. "equivalent system:
+   * pitch, q and nz fitted together, M 1.41 (guidance 10)"
+   */
+  basis?: string;
+  /** the second figure of a region criterion (judged together with `value`) */
+  against?: { quantity: Quantity; value: number | null; unit: string };
 }
 
 /** d value / d parameter of one number of the model as written, and the change that reaches the boundary. */
@@ -315,6 +340,59 @@ export interface NotApplicable {
   reason: string;
 }
 
+// ---------------------------------------------------------------- equivalent systems
+
+export type ControlAxisName = 'pitch' | 'roll' | 'yaw';
+
+/** One response of an equivalent-system fit, with the points it was fitted over. */
+export interface EquivalentChannel {
+  output: string;
+  /** K of the form [output unit per input unit] */
+  gain: number;
+  /** [s] */
+  timeDelay: number;
+  /** mismatch M over this response's points */
+  mismatch: number;
+  /** the high-order response as fitted: [rad/s], [dB], [deg] */
+  hos: { frequency: number[]; gain: number[]; phase: number[] };
+  /** the equivalent system at the same frequencies: [dB], [deg] */
+  loes: { gain: number[]; phase: number[] };
+  /** low-frequency dynamics held at their high-order values, when any */
+  fixed?: string;
+}
+
+/** A low-order equivalent system fitted to one axis of a condition (results contract). */
+export interface EquivalentSystem {
+  axis: ControlAxisName;
+  /** the cockpit input, e.g. Fes */
+  input: string;
+  /** the primary output, e.g. q */
+  output: string;
+  form: string;
+  /** how the pitch fit treated 1/Ttheta2 (q-and-nz, q-with-fixed-ttheta2, q-only), p-only, beta-only */
+  method: string;
+  /** pitch { gain, inverseTtheta2 [1/s], dampingRatio, naturalFrequency [rad/s] }; roll { gain,
+   *  rollTimeConstant [s] }; yaw { gain, dampingRatio, naturalFrequency [rad/s] } */
+  parameters: Record<string, number>;
+  /** [s] equivalent time delay of the primary output */
+  timeDelay: number;
+  /** the largest mismatch of the fitted responses */
+  mismatch: number;
+  mismatchForm: string;
+  /** the guidance the mismatch is held against */
+  mismatchGuidance: number;
+  /** [rad/s] */
+  frequencyRange: [number, number];
+  /** points per response */
+  points: number;
+  valid: boolean;
+  /** why not valid, or what limits the fit */
+  remarks: string[];
+  /** where the high-order response came from */
+  from: 'model' | 'frequency response';
+  channels: EquivalentChannel[];
+}
+
 export interface ConditionResult {
   id: string;
   phase: string;
@@ -336,6 +414,8 @@ export interface ConditionResult {
   notApplicable: NotApplicable[];
   /** responses to the cockpit controls; null when the condition names none */
   responses: ConditionResponses | null;
+  /** low-order equivalent systems fitted for the condition's controls (absent when none) */
+  equivalentSystems?: EquivalentSystem[];
   warnings: string[];
   /** conversions and defaults applied */
   notes: string[];
@@ -569,6 +649,8 @@ export interface ResolvedCriterion {
     altitude?: { below?: number; atOrAbove?: number };
   };
   levels: LevelBounds;
+  /** a region criterion: the levels are regions in the plane of `quantity` and `region.against` */
+  region?: LevelRegions;
   /** quantity-specific parameters (e.g. the omega^2 |phi/beta| adjustment factors) */
   params: Record<string, number | string | boolean>;
   /** document and paragraph */

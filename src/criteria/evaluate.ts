@@ -16,11 +16,15 @@ import type {
   ResolvedCriteriaSet,
   ResolvedCriterion,
   NotApplicable,
+  EquivalentSystem,
 } from '../types.js';
 import { flat } from '../flat-string.js';
-import { evaluators, isResponseRow } from './evaluators.js';
+import { AXIS_MODE, equivalentBasis, equivalentMode } from '../equivalent/equivalent-mode.js';
+import { evaluators, isResponseRow, type CriterionArgs as OneArgs, type ResponseFigures } from './evaluators.js';
 import { findingEvidence } from './evidence.js';
+import { judged, notEvaluated } from './finding.js';
 import { expandedLevelsOf, expandLevels, levelKey } from './level-bounds.js';
+import { judgeRegion } from './region-verdict.js';
 import { judge } from './verdict.js';
 
 export interface ConditionEvaluation {
@@ -40,9 +44,16 @@ export function evaluateCondition(input: {
   set: ResolvedCriteriaSet;
   /** the responses to the cockpit controls; absent or null when the condition names none */
   responses?: ConditionResponses | null;
+  /** equivalent systems fitted for the condition's controls; each also goes through the modal criteria */
+  equivalentSystems?: readonly EquivalentSystem[];
+  /** bandwidth and phase delay, for the region criteria */
+  responseFigures?: ResponseFigures;
+  /** set when the condition has no model to take roots from (e.g. frequency responses only): why the modal criteria are not evaluated */
+  noModes?: string;
 }): ConditionEvaluation {
   const { aircraftClass, condition, analysis, set } = input;
   const responses = input.responses ?? null;
+  const equivalents = input.equivalentSystems ?? [];
   const category = set.phaseCategories[condition.phase];
   if (category === undefined) {
     const known = Object.keys(set.phaseCategories);
@@ -70,7 +81,8 @@ export function evaluateCondition(input: {
       findings.push(notEvaluatedHere(criterion, requiredLevel, `the criterion applies by altitude and condition '${condition.id}' gives no altitude`));
       continue;
     }
-    if (isResponseRow(evaluators[criterion.quantity])) {
+    const row = evaluators[criterion.quantity];
+    if (isResponseRow(row)) {
       // a model that names no cockpit controls asks for modes only: said, never passed
       if (responses === null) {
         notApplicable.push({ criterion: criterion.id, set: criterion.set, title: criterion.title, source: criterion.source, reason: NO_CONTROLS });
@@ -79,15 +91,40 @@ export function evaluateCondition(input: {
       findings.push(evaluateOne({ criterion, mode: null, condition, analysis, aircraftClass, requiredLevel, set, responses }));
       continue;
     }
+    const common = { condition, analysis, aircraftClass, requiredLevel, set, responses, ...(input.responseFigures ? { responseFigures: input.responseFigures } : {}) };
+    if (row.from === 'response' || criterion.region) {
+      // a criterion of augmented aircraft: no pitch response, nothing to judge (the pipeline
+      // warns where the model looks augmented but names no controls)
+      if (!input.responseFigures?.pitch) continue;
+      findings.push(criterion.region ? judgeRegion({ criterion, ...common }) : evaluateResponse({ criterion, ...common }));
+      continue;
+    }
+    const fitted = equivalents.filter((e) => AXIS_MODE[e.axis] === criterion.mode);
+    if (row.from === 'equivalent') {
+      // likewise: an equivalent-system criterion makes no finding where no system was fitted
+      for (const e of fitted) findings.push(evaluateEquivalent({ criterion, ...common, equivalent: e }));
+      continue;
+    }
+    // modal criteria: the raw roots, then the equivalent system of the axis where one is fitted
+    const withEquivalents = () => {
+      for (const e of fitted) findings.push(evaluateEquivalent({ criterion, ...common, equivalent: e }));
+    };
+    if (input.noModes !== undefined) {
+      findings.push(notEvaluatedHere(criterion, requiredLevel, input.noModes));
+      withEquivalents();
+      continue;
+    }
     const modes: Mode[] = [];
     for (const m of analysis.modes) if (m.kind === criterion.mode) modes.push(m);
     const absentMeans = criterion.params['notApplicableIfModeAbsent'];
     if (modes.length === 0 && typeof absentMeans === 'string') {
       notApplicable.push({ criterion: criterion.id, set: criterion.set, title: criterion.title, source: criterion.source, reason: absentMeans });
+      withEquivalents();
       continue;
     }
     if (modes.length === 0) {
       findings.push(notEvaluatedHere(criterion, requiredLevel, absentModeReason(criterion, analysis)));
+      withEquivalents();
       continue;
     }
     if (modes.length > 1) {
@@ -98,6 +135,7 @@ export function evaluateCondition(input: {
       if (mode.inaccurate !== undefined) findings.push(notEvaluatedHere(criterion, requiredLevel, mode.inaccurate));
       else findings.push(evaluateOne({ criterion, mode, condition, analysis, aircraftClass, requiredLevel, set, responses }));
     }
+    withEquivalents();
   }
   warnings.push(...uncoveredModes(set, analysis, aircraftClass, category, condition.phase));
   return { category, requiredLevel, requiredLevelFrom, findings, notApplicable, warnings: warnings.map(flat) };
@@ -190,63 +228,36 @@ function notEvaluatedHere(c: ResolvedCriterion, requiredLevel: Level, reason: st
   return notEvaluated(c, expandedLevelsOf(c.levels), findingEvidence(c, requiredLevel, false), reason, undefined);
 }
 
-/*
- * Findings are written out as literals, in the order of the `Finding` fields, with `method`
- * last when there is one: a sweep makes hundreds of thousands of them, and a spread of a base
- * object per finding made the evaluation allocation-bound.
- */
-function notEvaluated(
-  c: ResolvedCriterion,
-  bounds: Finding['bounds'],
-  evidence: Finding['evidence'],
-  reason: string,
-  method: string | undefined,
-): Finding {
-  return judged(c, bounds, evidence, null, null, 'not_evaluated', null, reason, method);
-}
 
-function judged(
-  c: ResolvedCriterion,
-  bounds: Finding['bounds'],
-  evidence: Finding['evidence'],
-  value: number | null,
-  level: Level | null,
-  verdict: Finding['verdict'],
-  margin: number | null,
-  reason: string,
-  method: string | undefined,
-): Finding {
-  const finding: Finding = {
-    criterion: c.id,
-    set: c.set,
-    title: c.title,
-    mode: c.mode,
-    quantity: c.quantity,
-    value,
-    unit: evaluators[c.quantity].unit,
-    level,
-    verdict,
-    margin,
-    bounds,
-    source: c.source,
-    evidence,
-    reason: flat(reason),
-  };
-  if (method !== undefined) finding.method = flat(method);
+/**
+ * A criterion judged on the figures of an equivalent system. A fit beyond the mismatch
+ * guidance is not used: its figure is shown, the verdict is not_evaluated, and the reason says so.
+ */
+function evaluateEquivalent(args: OneArgs & { equivalent: EquivalentSystem }): Finding {
+  const mode = equivalentMode(args.equivalent);
+  const finding = evaluateOne({ ...args, mode });
+  finding.basis = equivalentBasis(args.equivalent);
+  if (!args.equivalent.valid && finding.verdict !== 'not_evaluated') {
+    finding.verdict = 'not_evaluated';
+    finding.level = null;
+    finding.margin = null;
+    finding.reason = flat(`the equivalent system is not valid (${args.equivalent.remarks.join('; ')}): its figure is shown, not judged`);
+  }
   return finding;
 }
 
-function evaluateOne(args: {
-  criterion: ResolvedCriterion;
-  /** null for a response figure (no mode needed) */
-  mode: Mode | null;
-  condition: FlightCondition;
-  analysis: ModalAnalysis;
-  aircraftClass: AircraftClass;
-  requiredLevel: Level;
-  set: ResolvedCriteriaSet;
-  responses: ConditionResponses | null;
-}): Finding {
+/** A criterion on a response figure (no mode): judged once per condition. */
+function evaluateResponse(args: OneArgs): Finding {
+  return evaluateOne({ ...args, mode: NO_MODE });
+}
+
+/** The mode argument of response rows, which do not read it. */
+const NO_MODE: Mode = {
+  kind: 'other', eigenvalues: [], naturalFrequency: null, dampingRatio: null, dampedFrequency: null, period: null,
+  timeConstant: null, timeToHalf: null, timeToDouble: null, cyclesToHalf: null, basis: '', ambiguous: false, referenceState: '', shape: [],
+};
+
+function evaluateOne(args: OneArgs & { mode: Mode | null; equivalent?: EquivalentSystem }): Finding {
   const { criterion, mode, requiredLevel, set } = args;
   const row = evaluators[criterion.quantity];
   const result = isResponseRow(row) ? row.evaluateResponses(args) : mode ? row.evaluate(mode, args) : { value: null, reason: 'no mode' };

@@ -3,9 +3,22 @@
  * and criterion) into the value to hold against the criterion's bounds. Adding a kind of
  * check adds a row here and a name to `Quantity` in src/types.ts.
  */
-import type { AircraftClass, ConditionResponses, FlightCondition, LevelBounds, ModalAnalysis, Mode, Quantity, ResolvedCriterion } from '../types.js';
+import type {
+  AircraftClass,
+  ConditionResponses,
+  EquivalentSystem,
+  FlightCondition,
+  Level,
+  LevelBounds,
+  ModalAnalysis,
+  Mode,
+  Quantity,
+  ResolvedCriteriaSet,
+  ResolvedCriterion,
+} from '../types.js';
 import {
   controlAnticipation,
+  STANDARD_GRAVITY,
   dampingFrequencyProduct,
   isDivergent,
   rollToSideslip,
@@ -20,6 +33,35 @@ export interface EvaluatorContext {
   criterion: ResolvedCriterion;
   /** the condition's responses to its cockpit controls (null when it names none) */
   responses: ConditionResponses | null;
+  /** set when the mode is the figures of this equivalent system rather than raw roots */
+  equivalent?: EquivalentSystem;
+  /** bandwidth and phase delay for the region criteria (from the model's responses or measured ones), when computed */
+  responseFigures?: ResponseFigures;
+}
+
+/** What judging one criterion in one condition needs. */
+export interface CriterionArgs {
+  criterion: ResolvedCriterion;
+  condition: FlightCondition;
+  analysis: ModalAnalysis;
+  aircraftClass: AircraftClass;
+  requiredLevel: Level;
+  set: ResolvedCriteriaSet;
+  responses: ConditionResponses | null;
+  responseFigures?: ResponseFigures;
+}
+
+/** The response figures the criteria read, each null with the reason when it cannot be had. */
+export interface ResponseFigures {
+  pitch?: {
+    /** [rad/s] */
+    bandwidth: number | null;
+    /** [s] */
+    phaseDelay: number | null;
+    /** how the figures were obtained, and why one is missing */
+    method: string;
+    reasons: { bandwidth?: string; phaseDelay?: string };
+  };
 }
 
 export interface Evaluation {
@@ -38,6 +80,11 @@ export interface ModeEvaluatorRow {
   unit: string;
   /** a damping figure: a divergent mode fails it whatever the value */
   damping: boolean;
+  /**
+   * where the figure comes from: the modes (raw roots, and the equivalent system where one is
+   * fitted), an equivalent system only, or the condition's responses (no mode needed)
+   */
+  from: 'mode' | 'equivalent' | 'response';
   evaluate(mode: Mode, context: EvaluatorContext): Evaluation;
 }
 
@@ -56,6 +103,7 @@ export function isResponseRow(row: EvaluatorRow): row is ResponseEvaluatorRow {
 
 export const evaluators: Record<Quantity, EvaluatorRow> = {
   damping_ratio: {
+    from: 'mode',
     unit: '-',
     damping: true,
     evaluate: (mode) => {
@@ -70,6 +118,7 @@ export const evaluators: Record<Quantity, EvaluatorRow> = {
   },
 
   natural_frequency: {
+    from: 'mode',
     unit: 'rad/s',
     damping: false,
     evaluate: (mode) =>
@@ -79,15 +128,18 @@ export const evaluators: Record<Quantity, EvaluatorRow> = {
   },
 
   cap: {
+    from: 'mode',
     unit: '1/(s^2 g)',
     damping: false,
-    evaluate: (mode, { condition }) => {
+    evaluate: (mode, { condition, equivalent }) => {
+      if (equivalent) return equivalentCap(mode, condition, equivalent);
       const cap = controlAnticipation(mode, condition);
       return cap.value === null ? { value: null, reason: cap.reason } : { value: cap.value, method: cap.method };
     },
   },
 
   damping_frequency_product: {
+    from: 'mode',
     unit: 'rad/s',
     damping: true,
     evaluate: (mode, context) => {
@@ -108,6 +160,7 @@ export const evaluators: Record<Quantity, EvaluatorRow> = {
   },
 
   time_to_double: {
+    from: 'mode',
     unit: 's',
     damping: false,
     evaluate: (mode) => {
@@ -117,6 +170,7 @@ export const evaluators: Record<Quantity, EvaluatorRow> = {
   },
 
   time_constant: {
+    from: 'mode',
     unit: 's',
     damping: true,
     evaluate: (mode) => {
@@ -149,7 +203,44 @@ export const evaluators: Record<Quantity, EvaluatorRow> = {
       return { value: entry.time, method: `time to change bank by ${deg} ${step}` };
     },
   },
+  equivalent_time_delay: {
+    from: 'equivalent',
+    unit: 's',
+    damping: false,
+    evaluate: (_mode, { equivalent }) =>
+      equivalent
+        ? { value: equivalent.timeDelay, method: `tau of the ${equivalent.axis} equivalent system (${equivalent.output}/${equivalent.input})` }
+        : { value: null, reason: 'no equivalent system fitted' },
+  },
+
+  pitch_bandwidth: { from: 'response', unit: 'rad/s', damping: false, evaluate: (_mode, { responseFigures }) => pitchFigure(responseFigures, 'bandwidth') },
+
+  pitch_phase_delay: { from: 'response', unit: 's', damping: false, evaluate: (_mode, { responseFigures }) => pitchFigure(responseFigures, 'phaseDelay') },
 };
+
+/** Bandwidth [rad/s] or phase delay [s] of the pitch attitude response, or why there is none. */
+function pitchFigure(responses: ResponseFigures | undefined, figure: 'bandwidth' | 'phaseDelay'): Evaluation {
+  const pitch = responses?.pitch;
+  if (!pitch) return { value: null, reason: 'no pitch attitude response: the condition names no pitch control' };
+  const value = pitch[figure];
+  return value === null ? { value: null, reason: pitch.reasons[figure] ?? `no ${figure === 'bandwidth' ? 'bandwidth' : 'phase delay'}` } : { value, method: pitch.method };
+}
+
+/**
+ * CAP of an equivalent system: omega_sp^2 / (n/alpha) with n/alpha = (V/g)(1/Ttheta2) of the
+ * fit (MIL-STD-1797A guidance; memory, high), i.e. CAP = omega_sp^2 g Ttheta2 / V.
+ */
+function equivalentCap(mode: Mode, condition: FlightCondition, equivalent: EquivalentSystem): Evaluation {
+  const omega = mode.naturalFrequency;
+  const inverse = equivalent.parameters['inverseTtheta2'];
+  if (omega === null || inverse === undefined) return { value: null, reason: 'the equivalent system has no short-period frequency or 1/Ttheta2' };
+  if (!(condition.airspeed > 0)) return { value: null, reason: 'the airspeed is not positive: n/alpha = (V/g)(1/Ttheta2) is undefined' };
+  const nAlpha = (condition.airspeed / STANDARD_GRAVITY) * inverse;
+  return {
+    value: (omega * omega) / nAlpha,
+    method: `CAP = omega_sp^2 / (n/alpha), n/alpha = (V/g)(1/Ttheta2) = ${nAlpha.toPrecision(4)} g/rad from the equivalent system`,
+  };
+}
 
 /**
  * MIL-F-8785C 3.3.1.1: where omega_n^2 |phi/beta| exceeds a threshold T (20 (rad/s)^2), the

@@ -20,4 +20,7 @@ export const DEFAULT_ABSOLUTE_BAND: Record<Quantity, number> = {
   time_to_double: 1,
   time_constant: 0.05,
   time_to_bank: 0.1,
+  equivalent_time_delay: 0.01,
+  pitch_bandwidth: 0.1,
+  pitch_phase_delay: 0.01,
 };

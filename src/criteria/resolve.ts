@@ -9,10 +9,11 @@ import {
   PROGRAMME_VALUE, type BoundInput, type CriterionInput, type EvidenceEntryInput, type OverrideInput,
 } from '../load/criteria-schema.js';
 import type {
-  Bound, Category, Evidence, Level, LevelBounds, Quantity, ResolvedCriteriaSet, ResolvedCriterion, SourceEntry,
+  Bound, Category, Evidence, Level, LevelBounds, LevelRegions, Quantity, ResolvedCriteriaSet, ResolvedCriterion, SourceEntry,
 } from '../types.js';
 import { citationProblems } from './evidence.js';
 import { expandLevels, LEVELS, levelKey, type LevelKey } from './level-bounds.js';
+import { expandRegions, inRegion } from './level-regions.js';
 import { DEFAULT_ABSOLUTE_BAND, DEFAULT_RELATIVE_BAND } from './marginal-band.js';
 import type { ParsedCriteriaFile } from './parsed-criteria-file.js';
 
@@ -38,6 +39,8 @@ interface Working {
   paramEvidence: (WorkingEvidence & { params: string[] })[];
   /** where the criterion was defined */
   origin: Origin;
+  /** where the region was last written, for a region criterion */
+  regionOrigin?: Origin;
 }
 
 export function resolveCriteriaChain(files: ParsedCriteriaFile[]): ResolvedCriteriaSet {
@@ -127,7 +130,8 @@ export function resolveCriteriaChain(files: ParsedCriteriaFile[]): ResolvedCrite
   for (const w of working.values()) {
     const levels = checkLevels(w, issues, issueAt, leaf);
     const evidence = checkEvidence(w, sources, issues, issueAt);
-    if (levels && evidence) criteria.push({ ...w.criterion, levels, ...evidence });
+    const regionOk = checkRegion(w, issues, issueAt);
+    if (levels && evidence && regionOk) criteria.push({ ...w.criterion, levels, ...evidence });
   }
   if (issues.length > 0) throw new InputError(issues);
 
@@ -172,10 +176,10 @@ function sourceText(source: { document: string; paragraph: string }): string {
 
 function fromInput(input: CriterionInput, origin: Origin, setId: string, issues: InputIssue[], issueAt: IssueAt): Working {
   const levelOrigin: Working['levelOrigin'] = {};
-  for (const key of Object.keys(input.levels) as LevelKey[]) {
+  for (const key of Object.keys(input.levels ?? {}) as LevelKey[]) {
     levelOrigin[key] = { file: origin.file, path: [...origin.path, 'levels', key] };
   }
-  const listed = Object.keys(input.levels) as LevelKey[];
+  const listed = Object.keys(input.levels ?? input.region?.levels ?? {}) as LevelKey[];
   const written = writtenEvidence(input.evidence, listed, { file: origin.file, path: [...origin.path, 'evidence'] }, setId, input.id, issues, issueAt);
   return {
     criterion: {
@@ -188,12 +192,14 @@ function fromInput(input: CriterionInput, origin: Origin, setId: string, issues:
       params: { ...(input.params ?? {}) },
       source: sourceText(input.source),
       note: input.note.trim(),
+      ...(input.region ? { region: structuredClone(input.region) as LevelRegions } : {}),
     },
-    levels: structuredClone(input.levels),
+    levels: structuredClone(input.levels ?? {}),
     levelOrigin,
     evidence: written.levels,
     paramEvidence: written.params,
     origin,
+    ...(input.region ? { regionOrigin: { file: origin.file, path: [...origin.path, 'region'] } } : {}),
   };
 }
 
@@ -272,6 +278,11 @@ function applyOverride(
       changed.push(`Level ${key} bounds`);
     }
   }
+  if (override.region !== undefined) {
+    c.region = structuredClone(override.region) as LevelRegions;
+    target.regionOrigin = { file: origin.file, path: [...origin.path, 'region'] };
+    changed.push('region');
+  }
   if (override.params !== undefined) {
     c.params = { ...c.params, ...override.params };
     changed.push('params');
@@ -318,7 +329,7 @@ function applyOverride(
   if (override.source !== undefined) {
     c.source = sourceText(override.source);
     changed.push('source');
-  } else if (override.levels !== undefined) {
+  } else if (override.levels !== undefined || override.region !== undefined) {
     c.source = `${c.source} (bounds changed by set ${setId})`;
   }
   if (override.note !== undefined) {
@@ -436,6 +447,46 @@ function checkLevels(w: Working, issues: InputIssue[], issueAt: IssueAt, leaf: P
     }
   }
   return issues.length > before ? undefined : numeric;
+}
+
+/**
+ * A region criterion: a region on one side and bounds on the other do not mix, and each
+ * level's polygon lies inside the next worse level's region (a Level 1 region reaching outside
+ * Level 2 is a copying error). Checked on the vertices.
+ */
+function checkRegion(w: Working, issues: InputIssue[], issueAt: IssueAt): boolean {
+  const region = w.criterion.region;
+  if (!region || !w.regionOrigin) return true;
+  const before = issues.length;
+  const origin = w.regionOrigin;
+  if (Object.keys(w.levels).some((k) => Object.keys(w.levels[k as LevelKey] ?? {}).length > 0)) {
+    issues.push(issueAt(origin, `criterion '${w.criterion.id}': a region criterion takes its levels from \`region\`, not from bounds`, 'conflicting_bounds'));
+  }
+  if (region.against === w.criterion.quantity) {
+    issues.push(issueAt({ file: origin.file, path: [...origin.path, 'against'] }, `criterion '${w.criterion.id}': the region needs two different quantities`, 'conflicting_bounds', region.against));
+  }
+  const expanded = expandRegions(region);
+  for (const level of LEVELS.slice(0, 2)) {
+    const better = expanded[levelKey(level)];
+    const worse = expanded[levelKey((level + 1) as Level)];
+    if (better === 'any') {
+      if (worse !== 'any') {
+        issues.push(issueAt({ file: origin.file, path: [...origin.path, 'levels', levelKey(level)] }, `criterion '${w.criterion.id}': Level ${level} is "any" but Level ${level + 1} is a polygon`, 'conflicting_bounds'));
+      }
+      continue;
+    }
+    const outside = better.find(([x, y]) => !inRegion(worse, x, y));
+    if (outside) {
+      issues.push(
+        issueAt(
+          { file: origin.file, path: [...origin.path, 'levels', levelKey(level)] },
+          `criterion '${w.criterion.id}': the Level ${level} vertex [${outside[0]}, ${outside[1]}] lies outside the Level ${level + 1} region`,
+          'conflicting_bounds',
+        ),
+      );
+    }
+  }
+  return issues.length === before;
 }
 
 function fmt(v: number): string {

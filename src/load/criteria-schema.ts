@@ -26,6 +26,9 @@ export const quantities = [
   'time_to_double',
   'time_constant',
   'time_to_bank',
+  'equivalent_time_delay',
+  'pitch_bandwidth',
+  'pitch_phase_delay',
 ] as const;
 
 const idText = z.string().regex(/^[a-z0-9]+(?:[-_.][a-z0-9]+)*$/, 'an id of lower-case letters, digits and - _ .');
@@ -58,6 +61,23 @@ export const appliesSchema = z
       .optional(),
   })
   .describe('where the criterion applies; a selector left out means all');
+
+const vertex = z
+  .tuple([z.number(), z.number()])
+  .describe("[x, y]: the criterion's quantity, then the `against` quantity, in their SI units");
+const polygonSchema = z
+  .union([z.array(vertex).min(3), z.literal('any')])
+  .describe('a closed polygon (at least 3 vertices, in order round the edge; the last joins the first), or "any" for the whole plane');
+
+export const regionSchema = z
+  .strictObject({
+    against: z.enum(quantities).describe('the quantity on the second (y) axis, judged together with the criterion quantity (x)'),
+    levels: z
+      .strictObject({ '1': polygonSchema, '2': polygonSchema.optional(), '3': polygonSchema.optional() })
+      .describe('the region of each level; a level left out holds the region of the next better level'),
+    figure: z.string().min(1).describe('the figure of the document the vertices are read from').optional(),
+  })
+  .describe('a region criterion: the point (quantity, against) must lie in the level\'s polygon');
 
 const paramsSchema = z.record(z.string(), z.union([z.number(), z.string(), z.boolean()]));
 
@@ -122,18 +142,24 @@ export const evidenceSchema = z
   .min(1)
   .describe('where each level of the bounds comes from; every level listed under `levels` is covered by exactly one entry');
 
-export const criterionSchema = z.strictObject({
-  id: idText,
-  title: z.string().min(1),
-  mode: z.enum(modeKinds),
-  quantity: z.enum(quantities),
-  applies: appliesSchema,
-  levels: levelsSchema,
-  params: paramsSchema.optional(),
-  source: sourceSchema,
-  evidence: evidenceSchema,
-  note: z.string().describe('Markdown'),
-});
+export const criterionSchema = z
+  .strictObject({
+    id: idText,
+    title: z.string().min(1),
+    mode: z.enum(modeKinds),
+    quantity: z.enum(quantities),
+    applies: appliesSchema,
+    levels: levelsSchema.describe('bounds per level (a region criterion gives `region` instead)').optional(),
+    region: regionSchema.optional(),
+    params: paramsSchema.optional(),
+    source: sourceSchema,
+    evidence: evidenceSchema,
+    note: z.string().describe('Markdown'),
+  })
+  .refine((c) => (c.levels === undefined) !== (c.region === undefined), {
+    message: 'a criterion gives `levels` (bounds) or `region` (polygons per level): exactly one of the two',
+    path: ['levels'],
+  });
 
 export const overrideSchema = z.strictObject({
   id: idText,
@@ -143,6 +169,7 @@ export const overrideSchema = z.strictObject({
     .strictObject({ '1': boundSchema.optional(), '2': boundSchema.optional(), '3': boundSchema.optional() })
     .describe('each level given replaces that level of the parent; the others are kept')
     .optional(),
+  region: regionSchema.describe('replaces the parent region whole').optional(),
   params: paramsSchema.describe('merged key by key into the parent params').optional(),
   source: sourceSchema.optional(),
   evidence: evidenceSchema

@@ -1,6 +1,7 @@
 /** `modalgate criteria show`: a resolved criteria set as terminal tables. */
 import { EVIDENCE_ORDER } from '../criteria/evidence.js';
-import type { Bound, EvidenceClass, ResolvedCriteriaSet } from '../types.js';
+import { expandRegions } from '../criteria/level-regions.js';
+import type { Bound, EvidenceClass, ResolvedCriteriaSet, ResolvedCriterion } from '../types.js';
 import { citationText, EVIDENCE_MEANING, evidenceGroups, levelClassesText, sourceEntryText } from './evidence-text.js';
 import { formatSig } from './format-number.js';
 import { textTable } from './text-table.js';
@@ -46,14 +47,25 @@ export function formatCriteriaSetText(written: ResolvedCriteriaSet): string {
         ]
           .filter(Boolean)
           .join('; '),
-        boundText(c.levels['1']),
-        boundText(c.levels['2']),
-        boundText(c.levels['3']),
+        ...levelTexts(c),
         c.source,
         levelClassesText(c),
       ]),
     ),
   );
+  const regions = set.criteria.filter((c) => c.region);
+  if (regions.length > 0) {
+    out.push('');
+    out.push('regions ([x, y] vertices, SI units):');
+    for (const c of regions) {
+      const r = expandRegions(c.region!);
+      out.push(`  ${c.id}: x ${c.quantity}, y ${c.region!.against}${c.region!.figure ? ` (${c.region!.figure})` : ''}`);
+      for (const key of ['1', '2', '3'] as const) {
+        const p = r[key];
+        out.push(`    Level ${key}: ${p === 'any' ? 'any point' : p.map(([x, y]) => `[${formatSig(x)}, ${formatSig(y)}]`).join(' ')}`);
+      }
+    }
+  }
   out.push('');
   out.push(`evidence of the ${set.criteria.length * 3} level boundaries: ${evidenceCounts(set)}`);
   for (const cls of EVIDENCE_ORDER) out.push(`  ${cls}: ${EVIDENCE_MEANING[cls]}`);
@@ -81,6 +93,15 @@ export function formatCriteriaSetText(written: ResolvedCriteriaSet): string {
     for (const d of set.dropped) out.push(`  ${d.id} (by ${d.by}): ${d.reason}`);
   }
   return out.join('\n');
+}
+
+function levelTexts(c: ResolvedCriterion): string[] {
+  if (!c.region) return [boundText(c.levels['1']), boundText(c.levels['2']), boundText(c.levels['3'])];
+  const r = expandRegions(c.region);
+  return (['1', '2', '3'] as const).map((k) => {
+    const p = r[k];
+    return p === 'any' ? 'any' : `region (${p.length} pts)`;
+  });
 }
 
 function boundText(b: Bound | undefined): string {

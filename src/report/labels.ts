@@ -20,6 +20,9 @@ export const QUANTITY_LABEL: Record<Quantity, string> = {
   time_to_double: 'time to double',
   time_constant: 'time constant',
   time_to_bank: 'time to bank',
+  equivalent_time_delay: 'equivalent time delay \u03c4e',
+  pitch_bandwidth: 'pitch bandwidth \u03c9BW',
+  pitch_phase_delay: 'phase delay \u03c4p',
 };
 
 /** Fallback units when a finding arrives without one (the quantity fixes its SI unit). */
@@ -31,6 +34,9 @@ export const QUANTITY_UNIT: Record<Quantity, string> = {
   time_to_double: 's',
   time_constant: 's',
   time_to_bank: 's',
+  equivalent_time_delay: 's',
+  pitch_bandwidth: 'rad/s',
+  pitch_phase_delay: 's',
 };
 
 export function classLabel(cls: AircraftClass): string {

@@ -87,7 +87,13 @@ describe('mil-f-8785c: values against MIL-F-8785C (5 Nov 1980)', () => {
     ['roll-performance-class-iv-cat-a', { '1': { max: 1.3 }, '2': { max: 1.7 }, '3': { max: 2.6 } }, M, '3.3.4'],
     ['roll-performance-class-iv-cat-b', { '1': { max: 1.7 }, '2': { max: 2.5 }, '3': { max: 3.4 } }, M, '3.3.4'],
     ['roll-performance-class-iv-cat-c', { '1': { max: 1 }, '2': { max: 1.3 }, '3': { max: 2 } }, M, '3.3.4'],
+    // 3.5.3 allowable equivalent time delay, each axis: 0.10 / 0.20 / 0.25 s (from memory)
+    ['equivalent-time-delay-pitch', { '1': { max: 0.1 }, '2': { max: 0.2 }, '3': { max: 0.25 } }, M, '3.5.3'],
+    ['equivalent-time-delay-roll', { '1': { max: 0.1 }, '2': { max: 0.2 }, '3': { max: 0.25 } }, M, '3.5.3'],
+    ['equivalent-time-delay-yaw', { '1': { max: 0.1 }, '2': { max: 0.2 }, '3': { max: 0.25 } }, M, '3.5.3'],
   ];
+  /** MIL-STD-1797A guidance regions held in the same set (see the next describe). */
+  const guidance = ['pitch-bandwidth-phase-delay-cat-a', 'pitch-bandwidth-phase-delay-cat-c'];
 
   it.each(rows)('%s', (id, levels, evidence, paragraph) => {
     const c = criterion(mil, id);
@@ -97,7 +103,7 @@ describe('mil-f-8785c: values against MIL-F-8785C (5 Nov 1980)', () => {
   });
 
   it('holds no criterion beyond the rows checked above', () => {
-    expect(mil.criteria.map((c) => c.id).sort()).toEqual(rows.map((r) => r[0]).sort());
+    expect(mil.criteria.map((c) => c.id).sort()).toEqual([...rows.map((r) => r[0]), ...guidance].sort());
   });
 
   it('times the bank angle of each roll-performance row (3.3.4): 60 deg Class I A/B, 45 deg Class II A/B, 30 deg II-L C, 25 deg II-C C, 30 deg Class III, 90 deg Class IV A/B, 30 deg IV C (from memory; Class III: Table IXf)', () => {
@@ -176,5 +182,25 @@ describe('civil-dynamic-stability: 14 CFR 23.181 and 25.181', () => {
     const dr = criterion(set, 'part25-dutch-roll-positively-damped');
     expect(dr.levels).toEqual({ '1': { min: 0 } });
     expect(dr.params['strictBounds']).toBe(true);
+  });
+});
+
+describe('mil-f-8785c: bandwidth and phase-delay regions (MIL-STD-1797A 4.2.1.2 guidance, from memory, low)', () => {
+  // Category A Level 1 roughly bandwidth >= 6.5 rad/s with tau_p <= 0.12 s; Category C
+  // Level 1 roughly >= 2.5 rad/s; Level 2 to tau_p about 0.20 s (memory, low).
+  it.each([
+    ['pitch-bandwidth-phase-delay-cat-a', 'A', 6.5],
+    ['pitch-bandwidth-phase-delay-cat-c', 'C', 2.5],
+  ] as const)('%s', (id, category, bandwidth) => {
+    const c = criterion(mil, id);
+    expect(c.applies.categories).toEqual([category]);
+    expect(c.quantity).toBe('pitch_bandwidth');
+    expect(c.region?.against).toBe('pitch_phase_delay');
+    expect(c.region?.levels['1']).toEqual([[bandwidth, 0], [bandwidth, 0.12], [100, 0.12], [100, 0]]);
+    expect(c.region?.levels['2']).toEqual([[0, 0], [0, 0.2], [100, 0.2], [100, 0]]);
+    expect(c.region?.levels['3']).toBe('any');
+    expect([c.evidence['1'].class, c.evidence['2'].class, c.evidence['3'].class]).toEqual(['memory', 'memory', 'memory']);
+    expect(c.source).toBe('MIL-STD-1797A 4.2.1.2 (guidance)');
+    expect(c.region?.figure).toMatch(/to digitise/);
   });
 });

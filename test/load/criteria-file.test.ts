@@ -77,7 +77,17 @@ describe('loadCriteriaSet: bad files (messages pinned)', () => {
     [
       'unknown quantity',
       `${bad}/unknown-quantity.yaml`,
-      `${bad}/unknown-quantity.yaml:8:15: criteria[0].quantity: not one of the allowed values (expected "damping_ratio" | "natural_frequency" | "cap" | "damping_frequency_product" | "time_to_double" | "time_constant" | "time_to_bank", found "period") [invalid_value]`,
+      `${bad}/unknown-quantity.yaml:8:15: criteria[0].quantity: not one of the allowed values (expected "damping_ratio" | "natural_frequency" | "cap" | "damping_frequency_product" | "time_to_double" | "time_constant" | "time_to_bank" | "equivalent_time_delay" | "pitch_bandwidth" | "pitch_phase_delay", found "period") [invalid_value]`,
+    ],
+    [
+      'region criterion that also gives bounds',
+      `${bad}/region-and-levels.yaml`,
+      `${bad}/region-and-levels.yaml:12:7: criteria[0].levels: a criterion gives \`levels\` (bounds) or \`region\` (polygons per level): exactly one of the two (found a mapping) [custom]`,
+    ],
+    [
+      'Level 1 region reaching outside Level 2',
+      `${bad}/region-not-nested.yaml`,
+      `${bad}/region-not-nested.yaml:14:14: criteria[0].region.levels.1: criterion 'bw': the Level 1 vertex [2, 0.25] lies outside the Level 2 region [conflicting_bounds]`,
     ],
     [
       'heavily-damped threshold left unset (14 CFR 25.181 gives no number)',
