@@ -67,4 +67,7 @@ export const QUANTITY_TEXT: Record<Quantity, string> = {
   time_to_double: 'time to double',
   time_constant: 'time constant',
   time_to_bank: 'time to bank',
+  equivalent_time_delay: 'equivalent time delay',
+  pitch_bandwidth: 'pitch bandwidth',
+  pitch_phase_delay: 'phase delay',
 };
