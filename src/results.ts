@@ -4,6 +4,7 @@ import type {
   AircraftModel,
   ConditionResponses,
   ConditionResult,
+  EquivalentSystem,
   Finding,
   FlightCondition,
   InputFile,
@@ -35,12 +36,16 @@ export function assembleCondition(
   evaluations: ConditionEvaluation[],
   contents: ResultsContents,
   responses: ConditionResponses | null,
+  fits?: { systems: EquivalentSystem[]; notes: string[] },
 ): ConditionResult {
   const first = evaluations[0];
   const requiredLevel = first?.requiredLevel ?? condition.requiredLevel;
   const requiredLevelFrom = first?.requiredLevelFrom ?? (condition.requiredLevel !== null ? 'model' : null);
   const warnings = [...analysis.warnings];
   for (const e of evaluations) for (const w of e.warnings) if (!warnings.includes(w)) warnings.push(w);
+  for (const s of fits?.systems ?? []) {
+    if (!s.valid) warnings.push(`the ${s.axis} equivalent system is not valid (${s.remarks.join('; ')}): its figures are shown, not judged`);
+  }
   return {
     id: condition.id,
     phase: condition.phase,
@@ -56,8 +61,9 @@ export function assembleCondition(
     findings: evaluations.flatMap((e) => e.findings),
     notApplicable: evaluations.flatMap((e) => e.notApplicable),
     responses,
+    ...(fits && fits.systems.length > 0 ? { equivalentSystems: fits.systems } : {}),
     warnings,
-    notes: condition.notes,
+    notes: fits && fits.notes.length > 0 ? [...condition.notes, ...fits.notes] : condition.notes,
   };
 }
 

@@ -31,7 +31,23 @@ export interface StateSpace {
 }
 
 /** How a condition's dynamics were written. */
-export type DynamicsForm = 'stateSpace' | 'derivatives' | 'nondimensional' | 'mixed';
+export type DynamicsForm = 'stateSpace' | 'derivatives' | 'nondimensional' | 'mixed' | 'frequencyResponses';
+
+/** A measured or simulated frequency response read from a CSV file beside the model. */
+export interface MeasuredResponse {
+  /** the cockpit input as named in the model file */
+  input: string;
+  /** q, theta, nz, p, phi, beta or r */
+  output: string;
+  /** [rad/s] increasing */
+  frequency: number[];
+  /** [dB] */
+  gain: number[];
+  /** [deg] unwrapped from the lowest frequency */
+  phase: number[];
+  /** the CSV file, as the model file names it relative to itself */
+  file: string;
+}
 
 /** Lift data kept from nondimensional input, for n/alpha = q S CL_alpha / W. */
 export interface LiftData {
@@ -79,6 +95,8 @@ export interface FlightCondition {
   liftData: LiftData | null;
   /** the cockpit controls named by the condition (empty when none) */
   controls: CockpitControls;
+  /** measured or simulated frequency responses (empty when none) */
+  frequencyResponses: MeasuredResponse[];
   /** conversions and defaults applied while building the model, shown in every output */
   notes: string[];
   place: Place;
@@ -531,7 +549,7 @@ export interface ConditionResponses {
 }
 
 export interface InputFile {
-  role: 'model' | 'criteria' | 'table' | 'baseline';
+  role: 'model' | 'criteria' | 'table' | 'response' | 'baseline';
   path: string;
   sha256: string;
 }

@@ -82,7 +82,7 @@ const resultsSchema = z.object({
   tool: z.object({ name: z.literal('modalgate'), version: z.string() }),
   generatedAt: z.string().optional(),
   command: z.array(z.string()).optional(),
-  inputs: z.array(z.object({ role: z.enum(['model', 'criteria', 'table', 'baseline']), path: z.string(), sha256: z.string() })),
+  inputs: z.array(z.object({ role: z.enum(['model', 'criteria', 'table', 'response', 'baseline']), path: z.string(), sha256: z.string() })),
   aircraft: z.object({ name: z.string(), class: z.enum(['I', 'II-L', 'II-C', 'III', 'IV']) }),
   criteriaSets: z
     .array(

@@ -361,7 +361,7 @@ function checkEvidence(
       issues.push(issueAt({ file: entry.origin.file, path }, `criterion '${id}', ${what} (${entry.evidence.class}): ${p.message}`, 'evidence'));
     }
   };
-  const listed = Object.keys(w.levels) as LevelKey[];
+  const listed = Object.keys(w.criterion.region?.levels ?? w.levels) as LevelKey[];
   for (const key of listed) {
     const entry = w.evidence[key];
     if (!entry) {

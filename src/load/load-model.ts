@@ -17,7 +17,7 @@ import { parseStructuredText } from './structured-text.js';
 
 export interface LoadedModel {
   model: AircraftModel;
-  files: { role: 'model' | 'table'; path: string; sha256: string }[];
+  files: { role: 'model' | 'table' | 'response'; path: string; sha256: string }[];
 }
 
 export interface LoadOptions {
@@ -36,21 +36,63 @@ export async function loadModel(path: string, options: LoadOptions = {}): Promis
     // Relative to the model file, shown the way the model file's own path was given.
     const tablePath = isAbsolute(ref.file) ? ref.file : join(dirname(modelFile.path), ref.file);
     const namedAt = { file: modelFile.path, ...ref.place, field: 'conditionTable.file' };
-    checkContained(tablePath, modelFile.path, options.trustedFolders ?? [], namedAt);
+    checkContained(tablePath, modelFile.path, options.trustedFolders ?? [], namedAt, 'condition table');
     const table = await readInputFile(tablePath, { namedAt, what: 'condition table' });
     tables[ref.file] = { path: table.path, text: table.text };
     files.push({ role: 'table', path: table.path, sha256: table.sha256 });
   }
-  return { model: parseModel(modelFile.text, modelFile.path, tables, options.knownPhases), files };
+  // frequency-response files, under the same rules as the table
+  const responses: Record<string, TableText> = {};
+  for (const r of responseReferences(modelFile.text, modelFile.path)) {
+    if (responses[r.file] !== undefined) continue;
+    const responsePath = isAbsolute(r.file) ? r.file : join(dirname(modelFile.path), r.file);
+    const namedAt = { file: modelFile.path, ...r.place, field: r.field };
+    checkContained(responsePath, modelFile.path, options.trustedFolders ?? [], namedAt, 'frequency-response file');
+    const read = await readInputFile(responsePath, { namedAt, what: 'frequency-response file' });
+    responses[r.file] = { path: read.path, text: read.text };
+    files.push({ role: 'response', path: read.path, sha256: read.sha256 });
+  }
+  return { model: parseModel(modelFile.text, modelFile.path, tables, options.knownPhases, responses), files };
 }
 
-function checkContained(tablePath: string, modelPath: string, trusted: readonly string[], namedAt: Omit<InputIssue, 'message' | 'code'>): void {
+/** The frequency-response files the written conditions name, with their places. */
+function responseReferences(text: string, file: string): { file: string; field: string; place: { line?: number; column?: number } }[] {
+  if (!text.includes('frequencyResponses')) return [];
+  try {
+    const source = parseStructuredText(text, file);
+    const conditions = (source.value as { conditions?: unknown } | null)?.conditions;
+    if (!Array.isArray(conditions)) return [];
+    const out: { file: string; field: string; place: { line?: number; column?: number } }[] = [];
+    conditions.forEach((c, i) => {
+      const list = (c as { frequencyResponses?: unknown } | null)?.frequencyResponses;
+      if (!Array.isArray(list)) return;
+      list.forEach((r, j) => {
+        const ref = (r as { file?: unknown } | null)?.file;
+        if (typeof ref !== 'string' || ref === '') return;
+        const path = ['conditions', i, 'frequencyResponses', j, 'file'];
+        out.push({ file: ref, field: `conditions[${i}].frequencyResponses[${j}].file`, place: source.locate(path) ?? {} });
+      });
+    });
+    return out;
+  } catch (err) {
+    if (err instanceof InputError) return [];
+    throw err;
+  }
+}
+
+/** Whether `path` lies, by real path, inside `folder` (itself by real path). */
+export function isInside(path: string, folder: string): boolean {
+  const rel = relative(realOrSelf(folder), realOrSelf(path));
+  return rel !== '' && !rel.startsWith(`..${sep}`) && rel !== '..' && !isAbsolute(rel);
+}
+
+function checkContained(tablePath: string, modelPath: string, trusted: readonly string[], namedAt: Omit<InputIssue, 'message' | 'code'>, what: string): void {
   const modelFolder = dirname(modelPath);
   if ([modelFolder, ...trusted].some((folder) => isInside(tablePath, folder))) return;
   throw new InputError([
     {
       ...namedAt,
-      message: `the condition table ${tablePath} lies outside the model's folder ${realOrSelf(modelFolder)}; a model may name only files inside its folder (--trust-folder <folder> allows another)`,
+      message: `the ${what} ${tablePath} lies outside the model's folder ${realOrSelf(modelFolder)}; a model may name only files inside its folder (--trust-folder <folder> allows another)`,
       expected: 'a path inside the model\'s folder',
       found: JSON.stringify(tablePath),
       code: 'outside_folder',

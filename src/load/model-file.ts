@@ -9,9 +9,10 @@ import type { z } from 'zod';
 import { dedupeIssues, formatPath, InputError, type InputIssue } from '../errors.js';
 import { buildCondition, type BuildSettings } from '../model/build-condition.js';
 import type { ModelProblem } from '../model/problem.js';
-import type { AircraftModel, FlightCondition, Place, WrittenNaming } from '../types.js';
+import type { AircraftModel, FlightCondition, MeasuredResponse, Place, WrittenNaming } from '../types.js';
 import { defaultGravity, STANDARD_GRAVITY } from '../units.js';
 import { readConditionTable, type RowPlace } from './condition-table.js';
+import { readFrequencyResponse } from './frequency-response-file.js';
 import { conditionSchema, conditionTableSchema, modelFileSchema, type WrittenCondition, type WrittenConditionTable } from './model-schema.js';
 import { quickCheck } from './quick-check.js';
 import { parseStructuredText, type StructuredText } from './structured-text.js';
@@ -53,7 +54,13 @@ const acceptsCondition = quickCheck(conditionSchema);
  */
 export type KnownPhases = { sets: { id: string; phases: string[] }[] };
 
-export function parseModel(text: string, file: string, tables: Record<string, TableText> = {}, known?: KnownPhases): AircraftModel {
+export function parseModel(
+  text: string,
+  file: string,
+  tables: Record<string, TableText> = {},
+  known?: KnownPhases,
+  responseFiles: Record<string, TableText> = {},
+): AircraftModel {
   const source = parseStructuredText(text, file);
   const issues: InputIssue[] = [];
 
@@ -117,9 +124,19 @@ export function parseModel(text: string, file: string, tables: Record<string, Ta
       issues.push(...built.problems.map((p) => entry.issueOf(p)));
       continue;
     }
+    const measured = readResponses(written, responseFiles, entry);
+    if (measured.issues.length > 0) {
+      for (const issue of measured.issues) issues.push(issue);
+      continue;
+    }
     if (!settings) continue;
     const writtenSource = { condition: written as Record<string, unknown>, ...settings, naming: entry.naming };
-    conditions.push(withLazyPlace({ ...built.value, notes: [...built.value.notes, ...entry.notes], written: writtenSource }, entry.placeLater));
+    conditions.push(
+      withLazyPlace(
+        { ...built.value, frequencyResponses: measured.responses, notes: [...built.value.notes, ...entry.notes], written: writtenSource },
+        entry.placeLater,
+      ),
+    );
   }
 
   const unique = dedupeIssues(issues);
@@ -131,6 +148,30 @@ export function parseModel(text: string, file: string, tables: Record<string, Ta
     conditions,
     ...(source.warnings ? { warnings: source.warnings } : {}),
   };
+}
+
+/** The condition's frequency-response files, read (every bad row of every file reported). */
+function readResponses(written: WrittenCondition, files: Record<string, TableText>, entry: Entry): { responses: MeasuredResponse[]; issues: InputIssue[] } {
+  const responses: MeasuredResponse[] = [];
+  const issues: InputIssue[] = [];
+  const seen = new Set<string>();
+  (written.frequencyResponses ?? []).forEach((spec, j) => {
+    const pair = `${spec.input} -> ${spec.output}`;
+    if (seen.has(pair)) {
+      issues.push(entry.issueOf({ path: [...entry.path, 'frequencyResponses', j, 'output'], message: `a second ${pair} response`, expected: 'one file per input and output', found: spec.output, code: 'duplicate_name' }));
+      return;
+    }
+    seen.add(pair);
+    const text = files[spec.file];
+    if (!text) {
+      issues.push(entry.issueOf({ path: [...entry.path, 'frequencyResponses', j, 'file'], message: `frequency-response file ${spec.file} was not read`, expected: 'the file beside the model', found: spec.file, code: 'unreadable' }));
+      return;
+    }
+    const read = readFrequencyResponse(spec, text);
+    if (read.response) responses.push(read.response);
+    for (const issue of read.issues) issues.push(issue);
+  });
+  return { responses, issues };
 }
 
 const CHECK_ONLY: BuildSettings = { units: 'SI', gravity: STANDARD_GRAVITY, gravityOrigin: 'check only' };

@@ -178,6 +178,30 @@ export const cockpitControlsSchema = z
   })
   .strict();
 
+/**
+ * A measured or simulated frequency response of one output to one cockpit input, from a CSV
+ * file beside the model (one row per frequency; the header names the columns):
+ *   { input: Fes, output: q, file: fr-pitch.csv,
+ *     columns: { frequency: w, gain: gain_db, phase: phase_deg },
+ *     units: { frequency: rad/s, gain: dB, phase: deg } }
+ * The output names the axis: q, theta, nz (pitch), p, phi (roll), beta, r (yaw).
+ */
+export const frequencyResponseSchema = z
+  .object({
+    input: name,
+    output: z.enum(['q', 'theta', 'nz', 'p', 'phi', 'beta', 'r']),
+    file: name,
+    columns: z.object({ frequency: name, gain: name, phase: name }).strict(),
+    units: z
+      .object({
+        frequency: z.enum(['rad/s', 'Hz']),
+        gain: z.enum(['dB', 'ratio']),
+        phase: z.enum(['deg', 'rad']),
+      })
+      .strict(),
+  })
+  .strict();
+
 export const conditionSchema = z
   .object({
     id: name,
@@ -196,6 +220,8 @@ export const conditionSchema = z
     nondimensional: nondimensionalSchema.optional(),
     /** the pilot's controls, naming inputs of the model */
     controls: cockpitControlsSchema.optional(),
+    /** measured or simulated frequency responses, beside or instead of the dynamics */
+    frequencyResponses: z.array(frequencyResponseSchema).min(1).optional(),
   })
   .strict();
 
@@ -255,6 +281,7 @@ export type WrittenModelFile = z.infer<typeof modelFileFullSchema>;
 export type WrittenCondition = z.infer<typeof conditionSchema>;
 export type WrittenConditionTable = z.infer<typeof conditionTableSchema>;
 export type WrittenCockpitControls = z.infer<typeof cockpitControlsSchema>;
+export type WrittenFrequencyResponse = z.infer<typeof frequencyResponseSchema>;
 export type WrittenStateSpace = z.infer<typeof stateSpaceSchema>;
 export type WrittenLongitudinal = z.infer<typeof longitudinalSchema>;
 export type WrittenLateral = z.infer<typeof lateralSchema>;

@@ -39,8 +39,9 @@ export function buildCondition(written: WrittenCondition, settings: BuildSetting
   const forms = (['stateSpace', 'nondimensional'] as const).filter((f) => written[f] !== undefined) as string[];
   const derivativeParts = (['longitudinal', 'lateral'] as const).filter((f) => written[f] !== undefined);
   if (derivativeParts.length > 0) forms.push(derivativeParts.join(' + '));
-  if (forms.length === 0) {
-    problems.push({ path, message: 'no dynamics given', expected: 'one of stateSpace, longitudinal and/or lateral, nondimensional', found: 'none', code: 'dynamics_form' });
+  const responsesOnly = forms.length === 0 && written.frequencyResponses !== undefined;
+  if (forms.length === 0 && !responsesOnly) {
+    problems.push({ path, message: 'no dynamics given', expected: 'one of stateSpace, longitudinal and/or lateral, nondimensional, or frequencyResponses', found: 'none', code: 'dynamics_form' });
   } else if (forms.length > 1) {
     problems.push({ path, message: `${forms.length} dynamics forms given (${forms.join(', ')}); give exactly one`, expected: 'one of stateSpace, longitudinal and/or lateral, nondimensional', found: forms.join(', '), code: 'dynamics_form' });
   }
@@ -59,6 +60,7 @@ export function buildCondition(written: WrittenCondition, settings: BuildSetting
   const theta0 = readTheta0(written, path, problems);
   // Go on building after a problem where possible, so that the condition's other problems show too.
   const altitudeUsable = altitude !== null && altitude >= ATMOSPHERE_MIN_ALTITUDE && altitude <= ATMOSPHERE_MAX_ALTITUDE;
+  if (responsesOnly) return responsesOnlyCondition(written, requiredLevel, altitude, problems, length);
   if (forms.length !== 1 || (written.nondimensional !== undefined && !altitudeUsable)) return { ok: false, problems };
 
   if (units === 'US') notes.push(`written in US units: airspeed ft/s and altitude ft converted to SI (1 ft = 0.3048 m)`);
@@ -142,7 +144,45 @@ export function buildCondition(written: WrittenCondition, settings: BuildSetting
       system,
       liftData,
       controls,
+      frequencyResponses: [],
       notes,
+    },
+    notes: [],
+  };
+}
+
+/**
+ * A condition given by frequency responses alone: no state-space model, so no roots (the
+ * modal criteria are not evaluated on raw roots); the responses are read from their files by
+ * the loader and attached to the condition there.
+ */
+function responsesOnlyCondition(
+  written: WrittenCondition,
+  requiredLevel: Level | null,
+  altitude: number | null,
+  problems: ModelProblem[],
+  length: number,
+): Built<BuiltCondition> {
+  if (written.controls !== undefined) {
+    problems.push({ path: ['controls'], message: 'controls name inputs of a state-space model; this condition gives frequency responses only', expected: 'no controls (the responses name their input)', found: 'controls', code: 'conflict' });
+  }
+  if (problems.length > 0) return { ok: false, problems };
+  return {
+    ok: true,
+    value: {
+      id: written.id,
+      phase: written.phase,
+      airspeed: written.airspeed * length,
+      altitude,
+      requiredLevel,
+      nAlpha: written.nAlpha ?? null,
+      theta0: null,
+      form: 'frequencyResponses',
+      system: { states: [], A: [], inputs: [], B: [], outputs: [], C: [], D: [] },
+      liftData: null,
+      controls: {},
+      frequencyResponses: [],
+      notes: ['given by frequency responses only: no state-space model, so no roots'],
     },
     notes: [],
   };

@@ -52,6 +52,7 @@ const FORM_LABEL: Record<DynamicsForm, string> = {
   derivatives: 'dimensional stability derivatives',
   nondimensional: 'nondimensional coefficients',
   mixed: 'mixed forms',
+  frequencyResponses: 'frequency responses only',
 };
 
 const REQUIRED_FROM: Record<'model' | 'criteria default' | 'none', string> = {

@@ -5,12 +5,14 @@
  */
 import { evaluateCondition } from '../criteria/evaluate.js';
 import { InputError, type InputIssue } from '../errors.js';
+import { fitMeasuredResponses } from '../equivalent/fit-measured.js';
 import { analyseModes } from '../modes/analyse.js';
 import { analyseResponses } from '../responses/analyse-responses.js';
 import { bankAnglesOf } from '../criteria/bank-angles.js';
 import { assembleCondition } from '../results.js';
 import { withSensitivities } from '../sensitivity/finding-sensitivities.js';
-import type { AircraftClass, ConditionResult, FlightCondition, ResolvedCriteriaSet, ResultsContents, SensitivityChoice, VerdictCounts } from '../types.js';
+import type { AircraftClass, ConditionResponses, ConditionResult, FlightCondition, ModalAnalysis, ResolvedCriteriaSet, ResultsContents, SensitivityChoice, VerdictCounts } from '../types.js';
+import type { ResponseFigures } from '../criteria/evaluators.js';
 
 export interface ConditionsChecked {
   /** one per condition, in the order given (only those kept, when a `keep` test was given) */
@@ -66,17 +68,55 @@ export function checkOneCondition(
   issues: InputIssue[],
   sensitivities: SensitivityChoice = 'issues',
 ): ConditionResult {
-  const analysis = analyseModes(condition.system, { airspeed: condition.airspeed });
-  const responses = analyseResponses(condition, analysis, { bankAngles: bankAnglesOf(sets) });
+  const analysis = condition.form === 'frequencyResponses' ? NO_ANALYSIS : analyseModes(condition.system, { airspeed: condition.airspeed });
+  const responses = condition.form === 'frequencyResponses' ? null : analyseResponses(condition, analysis, { bankAngles: bankAnglesOf(sets) });
+  const fits = fitMeasuredResponses(condition);
+  // bandwidth and phase delay: from measured responses where given, else from the model's theta response
+  const responseFigures = fits.responses ?? figuresOfModel(responses);
+  const augmented = {
+    responses,
+    ...(fits.systems.length > 0 ? { equivalentSystems: fits.systems } : {}),
+    ...(responseFigures ? { responseFigures } : {}),
+    ...(condition.form === 'frequencyResponses' ? { noModes: RESPONSES_ONLY } : {}),
+  };
   const evaluations = [];
   for (const set of sets) {
     try {
-      const evaluation = evaluateCondition({ aircraftClass, condition, analysis, set, responses });
-      evaluations.push(withSensitivities({ aircraftClass, condition, analysis, set, evaluation, choice: sensitivities }));
+      const evaluation = evaluateCondition({ aircraftClass, condition, analysis, set, ...augmented });
+      // a condition of frequency responses only has no model numbers to move
+      evaluations.push(condition.form === 'frequencyResponses' ? evaluation : withSensitivities({ aircraftClass, condition, analysis, set, evaluation, choice: sensitivities }));
     } catch (err) {
       if (err instanceof InputError) issues.push(...err.issues);
       else throw err;
     }
   }
-  return assembleCondition(condition, analysis, evaluations, contents, responses);
+  return assembleCondition(condition, analysis, evaluations, contents, responses, fits);
 }
+
+/** The bandwidth figures the region criteria read, from the model's pitch responses (null without a pitch control). */
+function figuresOfModel(responses: ConditionResponses | null): ResponseFigures | undefined {
+  const pitch = responses?.pitch;
+  if (!pitch) return undefined;
+  return {
+    pitch: {
+      bandwidth: pitch.bandwidth,
+      phaseDelay: pitch.phaseDelay,
+      method: `theta/${pitch.input} from the model (${pitch.method})`,
+      reasons: {
+        ...(pitch.reasons.bandwidth ? { bandwidth: pitch.reasons.bandwidth } : {}),
+        ...(pitch.reasons.phaseDelay ? { phaseDelay: pitch.reasons.phaseDelay } : {}),
+      },
+    },
+  };
+}
+
+/** The modal analysis of a condition without a state-space model: nothing to analyse. */
+const NO_ANALYSIS: ModalAnalysis = {
+  subsystems: { longitudinal: [], lateral: [], kinematic: [], other: [] },
+  coupling: 0,
+  decoupled: true,
+  modes: [],
+  warnings: [],
+};
+
+const RESPONSES_ONLY = 'the condition gives frequency responses only (no state-space model): no raw roots to judge';

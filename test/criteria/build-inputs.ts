@@ -77,6 +77,7 @@ export function conditionOf(fields: Partial<FlightCondition> & { phase: string }
     system: { states: [], A: [], inputs: [], B: [], outputs: [], C: [], D: [] },
     liftData: null,
     controls: {},
+    frequencyResponses: [],
     notes: [],
     place: { file: 'test-model.yaml', line: 3, column: 5 },
     ...fields,
