@@ -316,6 +316,8 @@ export interface Finding {
   basis?: string;
   /** the second figure of a region criterion (judged together with `value`) */
   against?: { quantity: Quantity; value: number | null; unit: string };
+  /** the level regions of a region criterion, every level filled in ([x, y] vertices, SI) */
+  region?: Record<'1' | '2' | '3', [number, number][] | 'any'>;
 }
 
 /** d value / d parameter of one number of the model as written, and the change that reaches the boundary. */

@@ -31,6 +31,7 @@ export function judgeRegion(args: CriterionArgs): Finding {
     const reason = [x.reason, y.reason].filter((r): r is string => r !== undefined).join('; ');
     const finding = judged(criterion, bounds, evidence, x.value, null, 'not_evaluated', null, reason || 'a figure of the region is missing', method || undefined);
     finding.against = against;
+    finding.region = expandRegions(region) as NonNullable<Finding['region']>;
     return finding;
   }
   const regions = expandRegions(region);
@@ -51,5 +52,6 @@ export function judgeRegion(args: CriterionArgs): Finding {
   }
   const finding = judged(criterion, bounds, evidence, x.value, level, verdict, shownMargin, flat(reason), method || undefined);
   finding.against = against;
+  finding.region = regions as NonNullable<Finding['region']>;
   return finding;
 }

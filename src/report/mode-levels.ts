@@ -20,7 +20,8 @@ export interface ModeLevel {
 }
 
 /** True when every level carries the same bound: the criterion is a single requirement. */
-export function isSingleRequirement(f: Pick<Finding, 'bounds'>): boolean {
+export function isSingleRequirement(f: Pick<Finding, 'bounds' | 'against'>): boolean {
+  if (f.against !== undefined) return false; // a region criterion grades levels by its polygons
   const e = expandLevels(f.bounds);
   const same = (a: { min?: number; max?: number }, b: { min?: number; max?: number }) => a.min === b.min && a.max === b.max;
   return same(e['1'], e['2']) && same(e['2'], e['3']);
@@ -33,7 +34,8 @@ function rankOf(f: Finding): number {
 }
 
 export function modeLevel(c: Pick<ConditionResult, 'findings'>, kind: ModeKind): ModeLevel {
-  const own = c.findings.filter((f) => f.mode === kind);
+  // the mode's own roots only: equivalent-system and response findings are not figures of the raw mode
+  const own = c.findings.filter((f) => f.mode === kind && f.basis === undefined && f.against === undefined);
   const evaluated = own.filter((f) => f.verdict !== 'not_evaluated');
   const notEvaluated = own.length - evaluated.length;
   if (own.length === 0) return { level: undefined, verdict: null, decidedBy: null, notEvaluated };

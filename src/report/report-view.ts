@@ -67,6 +67,8 @@ export interface FindingRow {
   /** why this verdict: filled for every verdict but a pass (whose level column says it) */
   reason: string;
   method: string | null;
+  /** where the figure came from when not the raw roots (e.g. the equivalent system) */
+  basis: string | null;
   /** what would move it: one number at a time (findings given sensitivities only) */
   moves: MovesView | null;
 }
@@ -112,8 +114,26 @@ export interface ConditionView {
   /** applicable criteria that made no finding here; never counted as a pass */
   notApplicable: NotApplicableRow[];
   charts: ChartView[];
+  /** low-order equivalent systems fitted for the condition (empty when none) */
+  equivalentSystems: EquivalentSystemRow[];
   /** why the charts are left out of this section, when they are (large sweeps) */
   chartsOmitted: string | null;
+}
+
+export interface EquivalentSystemRow {
+  axis: string;
+  response: string;
+  form: string;
+  method: string;
+  points: number;
+  range: string;
+  from: string;
+  figures: string;
+  timeDelay: string;
+  mismatch: string;
+  guidance: string;
+  valid: boolean;
+  remarks: string[];
 }
 
 export interface NotApplicableRow {

@@ -3,7 +3,7 @@
  * Verdicts are words with a symbol; colour is added only when asked (a TTY without NO_COLOR)
  * and never carries meaning alone.
  */
-import type { ConditionResult, Finding, Results, Verdict } from '../types.js';
+import type { ConditionResult, EquivalentSystem, Finding, Results, Verdict } from '../types.js';
 import { hasIssue } from './condition-status.js';
 import { isRealMode, modeStability } from '../modes/stability.js';
 import { defaultsBehind } from './finding-defaults.js';
@@ -75,7 +75,8 @@ export function formatResultsText(written: Results, options: TerminalOptions): s
       continue;
     }
     for (const n of c.notes) out.push(`  note: ${n}`);
-    out.push(indent(modesTable(c, options.findings)));
+    if (c.modes.length > 0) out.push(indent(modesTable(c, options.findings)));
+    if (c.equivalentSystems && c.equivalentSystems.length > 0) out.push(indent(equivalentTable(c.equivalentSystems)));
     if (options.findings) {
       if (c.findings.length === 0) out.push('  (no criterion applies to this condition)');
       else out.push(indent(findingsTable(c, (v, t) => paint(VERDICT_COLOR[v], t))));
@@ -230,12 +231,41 @@ function modesTable(c: ConditionResult, withLevels: boolean): string {
   );
 }
 
+/** The equivalent systems of a condition: form, figures, delay, mismatch beside its guidance, validity. */
+function equivalentTable(systems: EquivalentSystem[]): string {
+  return textTable(
+    [
+      { header: 'equivalent system' },
+      { header: 'fit' },
+      { header: 'figures' },
+      { header: 'tau [s]', align: 'right' },
+      { header: 'mismatch M (guidance)', align: 'right' },
+      { header: 'valid' },
+    ],
+    systems.map((s) => [
+      `${s.axis}: ${s.output}/${s.input}`,
+      `${s.method}, ${s.points} pts ${formatSig(s.frequencyRange[0])}-${formatSig(s.frequencyRange[1])} rad/s`,
+      equivalentFigures(s),
+      formatSig(s.timeDelay),
+      `${formatSig(s.mismatch)} (${s.mismatchGuidance})`,
+      s.valid ? 'yes' : 'NOT VALID',
+    ]),
+  );
+}
+
+function equivalentFigures(s: EquivalentSystem): string {
+  const p = s.parameters;
+  if (s.axis === 'roll') return `T_R ${formatSig(p['rollTimeConstant'])} s`;
+  const base = `zeta ${formatSig(p['dampingRatio'])}, wn ${formatSig(p['naturalFrequency'])} rad/s`;
+  return s.axis === 'pitch' ? `${base}, 1/Ttheta2 ${formatSig(p['inverseTtheta2'])} 1/s` : base;
+}
+
 function findingsTable(c: ConditionResult, paintVerdict: (v: Verdict, text: string) => string): string {
   const rows = c.findings.map((f) => [
-    f.criterion,
+    f.basis !== undefined ? `${f.criterion} (equivalent)` : f.criterion,
     `${MODE_TEXT[f.mode]} ${QUANTITY_TEXT[f.quantity]}`,
-    valueText(f),
-    boundsText(f.bounds[String(c.requiredLevel ?? 1) as '1' | '2' | '3']),
+    f.against ? `${valueText(f)}, ${formatSig(f.against.value)} ${f.against.unit}` : valueText(f),
+    f.against ? `Level ${c.requiredLevel ?? 1} region` : boundsText(f.bounds[String(c.requiredLevel ?? 1) as '1' | '2' | '3']),
     levelReachedWords(f) ?? '-',
     VERDICT_TEXT[f.verdict],
     formatSig(f.margin),

@@ -7,7 +7,7 @@ import { countVerdicts } from '../results.js';
 import { EVIDENCE_ORDER, weaker } from '../criteria/evidence.js';
 import { expandLevels } from '../criteria/level-bounds.js';
 import type {
-  ConditionResult, DynamicsForm, EvidenceClass, Finding, Quantity, ResolvedCriteriaSet, ResolvedCriterion, ResultMode, Results, SourceEntry, VerdictCounts,
+  ConditionResult, DynamicsForm, EquivalentSystem, EvidenceClass, Finding, Quantity, ResolvedCriteriaSet, ResolvedCriterion, ResultMode, Results, SourceEntry, VerdictCounts,
 } from '../types.js';
 import { EVIDENCE_MEANING, evidenceGroups, levelClassesText } from './evidence-text.js';
 import { STANDING_CAUTIONS } from './cautions.js';
@@ -15,13 +15,15 @@ import { comparisonView } from './comparison/comparison-view.js';
 import { conditionVerdict } from './condition-status.js';
 import { type DetailMode, selectDetail } from './detail-selection.js';
 import { envelopeView } from './envelope/envelope-view.js';
+import { bandwidthChart, bandwidthFinding } from './charts/bandwidth-chart.js';
+import { bodeOverlayChart } from './charts/bode-overlay-chart.js';
 import { dutchRollChart } from './charts/dutch-roll-chart.js';
 import { sPlaneChart } from './charts/s-plane-chart.js';
 import { shortPeriodChart } from './charts/short-period-chart.js';
 import { safeId } from './charts/svg-kit.js';
 import { categoryLabel, classLabel, MODE_LABEL, QUANTITY_LABEL, QUANTITY_UNIT } from './labels.js';
 import type {
-  ChartView, ConditionView, CriteriaSetView, EvidenceSummaryView, FindingRow, ModeRow, MovesView, OverviewView, ReportView, SourceView, VerdictTally,
+  ChartView, ConditionView, EquivalentSystemRow, CriteriaSetView, EvidenceSummaryView, FindingRow, ModeRow, MovesView, OverviewView, ReportView, SourceView, VerdictTally,
 } from './report-view.js';
 import { VERDICT_ORDER, verdictMark, worstVerdict } from './verdict-marks.js';
 import { boundText, dateText, eigenvalueText, levelBoundsText, lengthText, mathText, NONE, sig, signedSig, unitText, withUnit } from './view-format.js';
@@ -92,9 +94,15 @@ function modeRow(mode: ResultMode, c: ConditionResult): ModeRow {
   };
 }
 
+/** The level columns of a region criterion: each level's polygon named, not its vertices (they are in the chart). */
+function regionBoundsText(region: NonNullable<Finding['region']>): FindingRow['bounds'] {
+  const text = (r: [number, number][] | 'any') => (r === 'any' ? 'any' : `region (${r.length} pts)`);
+  return { l1: text(region['1']), l2: text(region['2']), l3: text(region['3']) };
+}
+
 function findingRow(f: Finding, c: ConditionResult, showSet: boolean): FindingRow {
   const unit = f.unit.trim() !== '' ? f.unit : QUANTITY_UNIT[f.quantity];
-  const bounds = levelBoundsText(f.bounds);
+  const bounds = f.region ? regionBoundsText(f.region) : levelBoundsText(f.bounds);
   return {
     criterion: f.criterion,
     // one set in use: its id is in the title block, not on every row
@@ -103,7 +111,7 @@ function findingRow(f: Finding, c: ConditionResult, showSet: boolean): FindingRo
     mode: MODE_LABEL[f.mode],
     quantity: QUANTITY_LABEL[f.quantity],
     unit: unitText(unit),
-    value: sig(f.value),
+    value: f.against ? `${sig(f.value)}, ${sig(f.against.value)} ${f.against.unit}` : sig(f.value),
     bounds,
     singleBound: isSingleRequirement(f) ? bounds.l1 : null,
     levelReached: levelReachedWords(f) ?? NONE,
@@ -117,6 +125,7 @@ function findingRow(f: Finding, c: ConditionResult, showSet: boolean): FindingRo
     reason: f.verdict === 'pass' ? '' : mathText(f.reason),
     method: f.method === undefined ? null : mathText(f.method),
     moves: movesView(f),
+    basis: f.basis ?? null,
   };
 }
 
@@ -145,11 +154,50 @@ function namePrefix(parameter: string): string {
 
 function charts(c: ConditionResult): ChartView[] {
   const id = safeId(c.id);
-  return [
-    { id: `${id}-s-plane`, title: 's-plane map', ...sPlaneChart(c) },
-    { id: `${id}-short-period`, title: 'Short period: \u03c9sp against n/\u03b1', ...shortPeriodChart(c) },
-    { id: `${id}-dutch-roll`, title: 'Dutch roll: \u03b6d against \u03c9nd', ...dutchRollChart(c) },
-  ];
+  const out: ChartView[] = [];
+  if (c.modes.length > 0) {
+    out.push(
+      { id: `${id}-s-plane`, title: 's-plane map', ...sPlaneChart(c) },
+      { id: `${id}-short-period`, title: 'Short period: \u03c9sp against n/\u03b1', ...shortPeriodChart(c) },
+      { id: `${id}-dutch-roll`, title: 'Dutch roll: \u03b6d against \u03c9nd', ...dutchRollChart(c) },
+    );
+  }
+  for (const s of c.equivalentSystems ?? []) {
+    for (const ch of s.channels) {
+      out.push({ id: `${id}-loes-${s.axis}-${safeId(ch.output)}`, title: `Equivalent system, ${s.axis}: ${ch.output}/${s.input}`, ...bodeOverlayChart(s, ch) });
+    }
+  }
+  if (bandwidthFinding(c)) out.push({ id: `${id}-bandwidth`, title: 'Pitch bandwidth and phase delay', ...bandwidthChart([c], c.id) });
+  return out;
+}
+
+function equivalentRow(s: EquivalentSystem): EquivalentSystemRow {
+  const p = s.parameters;
+  const figures =
+    s.axis === 'roll'
+      ? `T_R ${sig(p['rollTimeConstant'])} s`
+      : `\u03b6 ${sig(p['dampingRatio'])}, \u03c9n ${sig(p['naturalFrequency'])} rad/s${s.axis === 'pitch' ? `, 1/T\u03b82 ${sig(p['inverseTtheta2'])} 1/s` : ''}`;
+  const gains = s.channels.map((ch) => `K(${ch.output}) ${sig(ch.gain)}`).join(', ');
+  const method =
+    s.method === 'q-and-nz' ? 'q and nz fitted together (common \u03b6, \u03c9n)'
+      : s.method === 'q-with-fixed-ttheta2' ? '1/T\u03b82 held at the airframe value'
+        : s.method === 'q-only' ? 'q alone (1/T\u03b82 may be unrealistic)'
+          : `${s.output} alone`;
+  return {
+    axis: s.axis,
+    response: s.channels.map((ch) => `${ch.output}/${s.input}`).join(', '),
+    form: s.form,
+    method,
+    points: s.points,
+    range: `${sig(s.frequencyRange[0])} to ${sig(s.frequencyRange[1])} rad/s`,
+    from: s.from,
+    figures: `${figures}; ${gains}`,
+    timeDelay: sig(s.timeDelay),
+    mismatch: s.channels.length > 1 ? s.channels.map((ch) => `${ch.output} ${sig(ch.mismatch)}`).join(', ') : sig(s.mismatch),
+    guidance: `guidance ${s.mismatchGuidance}`,
+    valid: s.valid,
+    remarks: s.remarks,
+  };
 }
 
 /** Cautions the reader needs for this condition, beyond the warnings the analysis raised. */
@@ -207,6 +255,7 @@ function conditionView(c: ConditionResult, anchor: string, withCharts: boolean, 
     warnings: [...c.warnings, ...derivedWarnings(c)],
     notes: c.notes,
     charts: withCharts ? charts(c) : [],
+    equivalentSystems: (c.equivalentSystems ?? []).map(equivalentRow),
     chartsOmitted: withCharts ? null : chartsOmitted,
   };
 }

@@ -163,7 +163,7 @@ describe('HTML report in Chromium', () => {
 
   it('keeps every table of the shipped samples within the page column on screen', async () => {
     // A wide verdict matrix (24 criteria for the Class I sample) once ran past the column.
-    for (const sample of ['samples/ketra-kt4.yaml', 'samples/ketra-kt4-envelope.yaml']) {
+    for (const sample of ['samples/ketra-kt4.yaml', 'samples/ketra-kt4-envelope.yaml', 'samples/ketra-kt4f.yaml']) {
       const { results: r, sets: s } = await runCheck({ model: sample, criteria: ['mil-f-8785c'], toolVersion: 'test', command: [], generatedAt: '2026-12-02T00:00:00Z' });
       const { page } = await open(renderHtml(buildReportView(r, s, { reportId: 'MG-WIDTH', detail: 'all' })), 'width.html');
       await page.setViewport({ width: 1280, height: 900 });
