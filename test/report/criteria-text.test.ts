@@ -14,9 +14,10 @@ describe('formatCriteriaSetText: evidence and sources', () => {
   });
 
   it('counts the level boundaries by class and says what each class means', () => {
-    // 46 criteria x 3 levels (33 of the classical modes, 13 of roll performance); published: the template's own
-    // criterion (3 levels) and its two Level 1 overrides
-    expect(text).toMatch(/evidence of the 138 level boundaries: 5 published, \d+ secondary, 0 programme-set, 7 conflicting, \d+ memory/);
+    // 51 criteria x 3 levels (33 of the classical modes, 13 of roll performance, 5 of augmented aircraft: equivalent
+    // time delay per axis and two bandwidth regions); published: the template's own criterion (3 levels) and its two
+    // Level 1 overrides
+    expect(text).toMatch(/evidence of the 153 level boundaries: 5 published, \d+ secondary, 0 programme-set, 7 conflicting, \d+ memory/);
     expect(text).toContain('  conflicting: the sources disagree: each is listed with its value, and the evidence note says which value is kept');
   });
 
