@@ -15,7 +15,7 @@ const dash = process.argv.indexOf('--');
 const passOn = dash >= 0 ? process.argv.slice(dash + 1) : [];
 
 let failed = 0;
-for (const [name, passArgs] of [['modes.mjs', false], ['sweep.mjs', true], ['report.mjs', true], ['sensitivity.mjs', true]]) {
+for (const [name, passArgs] of [['modes.mjs', false], ['sweep.mjs', true], ['report.mjs', true], ['sensitivity.mjs', true], ['equivalent.mjs', false]]) {
   const file = join(HERE, name);
   console.log(`\n== bench/${name}`);
   if (!existsSync(file)) {

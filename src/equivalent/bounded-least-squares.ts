@@ -6,8 +6,8 @@
  */
 
 export interface LeastSquaresProblem {
-  /** residuals r(x) and their Jacobian J[i][k] = d r_i / d x_k at x */
-  evaluate(x: readonly number[]): { residuals: number[]; jacobian: number[][] };
+  /** residuals r(x) and their Jacobian, J[i n + k] = d r_i / d x_k at x (n parameters), fresh arrays each call */
+  evaluate(x: readonly number[]): { residuals: Float64Array; jacobian: Float64Array };
   lower: readonly number[];
   upper: readonly number[];
 }
@@ -49,13 +49,14 @@ export function boundedLeastSquares(
     const g = new Array<number>(n).fill(0);
     const N: number[][] = Array.from({ length: n }, () => new Array<number>(n).fill(0));
     for (let i = 0; i < residuals.length; i++) {
-      const row = jacobian[i]!;
+      const base = i * n;
       const r = residuals[i]!;
       for (let a = 0; a < n; a++) {
-        const ja = row[a]!;
+        const ja = jacobian[base + a]!;
         if (ja === 0) continue;
         g[a]! += ja * r;
-        for (let b = a; b < n; b++) N[a]![b]! += ja * row[b]!;
+        const row = N[a]!;
+        for (let b = a; b < n; b++) row[b]! += ja * jacobian[base + b]!;
       }
     }
     for (let a = 0; a < n; a++) for (let b = 0; b < a; b++) N[a]![b] = N[b]![a]!;
@@ -114,7 +115,7 @@ export function boundedLeastSquares(
   return { x, cost, iterations, converged };
 }
 
-function sumSquares(r: readonly number[]): number {
+function sumSquares(r: Float64Array): number {
   let s = 0;
   for (const v of r) s += v * v;
   return s;

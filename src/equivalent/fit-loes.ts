@@ -134,7 +134,7 @@ export function fitPitch(input: PitchFitInput): LoesFit {
       : { name: 'inverseTtheta2', lower: PITCH_BOUNDS.inverseTtheta2[0], upper: PITCH_BOUNDS.inverseTtheta2[1], starts: [0.6, 1.8], boundMatters: true },
     { name: 'dampingRatio', lower: PITCH_BOUNDS.zeta[0], upper: PITCH_BOUNDS.zeta[1], starts: [0.4, 0.9], boundMatters: true },
     { name: 'naturalFrequency', lower: PITCH_BOUNDS.omega[0], upper: PITCH_BOUNDS.omega[1], starts: [1.5, 3, 6], boundMatters: true },
-    { name: 'timeDelay', lower: PITCH_BOUNDS.tau[0], upper: PITCH_BOUNDS.tau[1], starts: [0.02, 0.12], boundMatters: false },
+    { name: 'timeDelay', lower: PITCH_BOUNDS.tau[0], upper: PITCH_BOUNDS.tau[1], starts: [0.06], boundMatters: false },
   ];
   const qTerms: Term[] = [
     { kind: 'gain', p: 0 },
@@ -270,7 +270,7 @@ function fitProblem(problem: Problem): BestFit {
 }
 
 /** Iterations each starting point is given before the best few are run to convergence. */
-const SCOUT_ITERATIONS = 8;
+const SCOUT_ITERATIONS = 6;
 const FINALISTS = 3;
 
 function leastSquaresOf(problem: Problem, offsets: readonly number[]) {
@@ -282,16 +282,25 @@ function leastSquaresOf(problem: Problem, offsets: readonly number[]) {
 }
 
 function residuals(problem: Problem, offsets: readonly number[], x: readonly number[]) {
-  const r: number[] = [];
-  const jac: number[][] = [];
+  const m = x.length;
+  let rows = 0;
+  for (const c of problem.channels) rows += 2 * c.channel.samples.frequency.length;
+  const r = new Float64Array(rows);
+  const jac = new Float64Array(rows * m);
+  let row = 0;
   problem.channels.forEach((c, ci) => {
     const s = c.channel.samples;
     const model = logResponse(c.terms, x, s.frequency);
+    const offset = offsets[ci]!;
     for (let i = 0; i < s.frequency.length; i++) {
-      r.push(s.gain[i]! - model.gain[i]!);
-      jac.push(model.dGain[i]!.map((d) => -d));
-      r.push(SQRT_W * (s.phase[i]! - offsets[ci]! - model.phase[i]!));
-      jac.push(model.dPhase[i]!.map((d) => -SQRT_W * d));
+      r[row] = s.gain[i]! - model.gain[i]!;
+      r[row + 1] = SQRT_W * (s.phase[i]! - offset - model.phase[i]!);
+      const base = row * m;
+      for (let k = 0; k < m; k++) {
+        jac[base + k] = -model.dGain[i * m + k]!;
+        jac[base + m + k] = -SQRT_W * model.dPhase[i * m + k]!;
+      }
+      row += 2;
     }
   });
   return { residuals: r, jacobian: jac };
@@ -340,7 +349,7 @@ function finish(
       mismatch: m,
       points: s.frequency.length,
       samples: { frequency: [...s.frequency], gain: [...s.gain], phase: phase.map((p) => p + sign) },
-      fitted: { frequency: [...s.frequency], gain: model.gain, phase: model.phase.map((p) => p + sign) },
+      fitted: { frequency: [...s.frequency], gain: Array.from(model.gain), phase: Array.from(model.phase, (p) => p + sign) },
       ...(c.channel.fixed ? { fixed: c.channel.fixed } : {}),
     };
   });

@@ -23,13 +23,13 @@ export type Term =
 
 export interface LogResponse {
   /** [dB] */
-  gain: number[];
+  gain: Float64Array;
   /** [deg] */
-  phase: number[];
-  /** d gain / d x[k] per point [dB per unit of x[k]] */
-  dGain: number[][];
-  /** d phase / d x[k] per point [deg per unit of x[k]] */
-  dPhase: number[][];
+  phase: Float64Array;
+  /** d gain / d x[k] at point i, at [i m + k] (m parameters) [dB per unit of x[k]] */
+  dGain: Float64Array;
+  /** d phase / d x[k] at point i, at [i m + k] [deg per unit of x[k]] */
+  dPhase: Float64Array;
 }
 
 const DB = 20 / Math.LN10;
@@ -39,25 +39,25 @@ const DEG = 180 / Math.PI;
 export function logResponse(terms: readonly Term[], x: readonly number[], w: readonly number[]): LogResponse {
   const n = w.length;
   const m = x.length;
-  const gain = new Array<number>(n).fill(0);
-  const phase = new Array<number>(n).fill(0);
-  const dGain = Array.from({ length: n }, () => new Array<number>(m).fill(0));
-  const dPhase = Array.from({ length: n }, () => new Array<number>(m).fill(0));
+  const gain = new Float64Array(n);
+  const phase = new Float64Array(n);
+  const dGain = new Float64Array(n * m);
+  const dPhase = new Float64Array(n * m);
   for (const term of terms) {
     for (let i = 0; i < n; i++) {
       const wi = w[i]!;
       switch (term.kind) {
         case 'gain':
           gain[i]! += x[term.p]!;
-          dGain[i]![term.p]! += 1;
+          dGain[i * m + term.p]! += 1;
           break;
         case 'first': {
           const a = x[term.p]!;
           const mag2 = wi * wi + a * a;
           gain[i]! += term.power * 0.5 * DB * Math.log(mag2);
           phase[i]! += term.power * DEG * Math.atan2(wi, a);
-          dGain[i]![term.p]! += term.power * DB * (a / mag2);
-          dPhase[i]![term.p]! += term.power * DEG * (-wi / mag2);
+          dGain[i * m + term.p]! += term.power * DB * (a / mag2);
+          dPhase[i * m + term.p]! += term.power * DEG * (-wi / mag2);
           break;
         }
         case 'second': {
@@ -72,15 +72,15 @@ export function logResponse(terms: readonly Term[], x: readonly number[], w: rea
           const dImZ = 2 * w0 * wi;
           const dReW = 2 * w0;
           const dImW = 2 * z * wi;
-          dGain[i]![term.zeta]! += term.power * DB * ((im * dImZ) / mag2);
-          dPhase[i]![term.zeta]! += term.power * DEG * ((re * dImZ) / mag2);
-          dGain[i]![term.omega]! += term.power * DB * ((re * dReW + im * dImW) / mag2);
-          dPhase[i]![term.omega]! += term.power * DEG * ((re * dImW - im * dReW) / mag2);
+          dGain[i * m + term.zeta]! += term.power * DB * ((im * dImZ) / mag2);
+          dPhase[i * m + term.zeta]! += term.power * DEG * ((re * dImZ) / mag2);
+          dGain[i * m + term.omega]! += term.power * DB * ((re * dReW + im * dImW) / mag2);
+          dPhase[i * m + term.omega]! += term.power * DEG * ((re * dImW - im * dReW) / mag2);
           break;
         }
         case 'delay':
           phase[i]! -= DEG * wi * x[term.p]!;
-          dPhase[i]![term.p]! -= DEG * wi;
+          dPhase[i * m + term.p]! -= DEG * wi;
           break;
         case 'fixed': {
           const f = fixedFactor(term.zeros, term.poles, wi);
