@@ -410,6 +410,8 @@ export interface EquivalentSystem {
   remarks: string[];
   /** where the high-order response came from */
   from: 'model' | 'frequency response';
+  /** pitch only: Gibson dropback figures of the equivalent system (no boundary judged) */
+  dropback?: { /** [s] DB/q_ss */ dropbackRatio: number; /** [-] q_pk/q_ss */ peakRatio: number; definition: string };
   channels: EquivalentChannel[];
 }
 

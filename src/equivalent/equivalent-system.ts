@@ -1,6 +1,7 @@
 /** A fit in the shape of the results contract (`conditions[].equivalentSystems[]`). */
 import type { EquivalentSystem } from '../types.js';
 import { FORMS, type LoesFit } from './fit-loes.js';
+import { dropbackFigures } from './dropback.js';
 import { MISMATCH_FORM } from './mismatch.js';
 
 export function toEquivalentSystem(fit: LoesFit, input: string, from: EquivalentSystem['from']): EquivalentSystem {
@@ -20,6 +21,9 @@ export function toEquivalentSystem(fit: LoesFit, input: string, from: Equivalent
     valid: fit.valid,
     remarks: fit.remarks,
     from,
+    ...(fit.axis === 'pitch'
+      ? { dropback: dropbackFigures(fit.parameters['inverseTtheta2']!, fit.parameters['dampingRatio']!, fit.parameters['naturalFrequency']!) }
+      : {}),
     channels: fit.channels.map((c) => ({
       output: c.output,
       gain: c.gain,

@@ -257,7 +257,9 @@ function equivalentFigures(s: EquivalentSystem): string {
   const p = s.parameters;
   if (s.axis === 'roll') return `T_R ${formatSig(p['rollTimeConstant'])} s`;
   const base = `zeta ${formatSig(p['dampingRatio'])}, wn ${formatSig(p['naturalFrequency'])} rad/s`;
-  return s.axis === 'pitch' ? `${base}, 1/Ttheta2 ${formatSig(p['inverseTtheta2'])} 1/s` : base;
+  if (s.axis !== 'pitch') return base;
+  const db = s.dropback ? `; DB/q_ss ${formatSig(s.dropback.dropbackRatio)} s, q_pk/q_ss ${formatSig(s.dropback.peakRatio)}` : '';
+  return `${base}, 1/Ttheta2 ${formatSig(p['inverseTtheta2'])} 1/s${db}`;
 }
 
 function findingsTable(c: ConditionResult, paintVerdict: (v: Verdict, text: string) => string): string {

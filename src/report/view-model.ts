@@ -191,7 +191,7 @@ function equivalentRow(s: EquivalentSystem): EquivalentSystemRow {
     points: s.points,
     range: `${sig(s.frequencyRange[0])} to ${sig(s.frequencyRange[1])} rad/s`,
     from: s.from,
-    figures: `${figures}; ${gains}`,
+    figures: `${figures}; ${gains}${s.dropback ? `; Gibson dropback DB/q_ss ${sig(s.dropback.dropbackRatio)} s, q_pk/q_ss ${sig(s.dropback.peakRatio)} (steady-state definition; no boundary judged)` : ''}`,
     timeDelay: sig(s.timeDelay),
     mismatch: s.channels.length > 1 ? s.channels.map((ch) => `${ch.output} ${sig(ch.mismatch)}`).join(', ') : sig(s.mismatch),
     guidance: `guidance ${s.mismatchGuidance}`,

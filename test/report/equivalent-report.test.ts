@@ -20,6 +20,9 @@ describe('KT-4F sample: equivalent systems and bandwidth', () => {
     expect(pitch!.method).toBe('q-and-nz');
     expect(pitch!.valid).toBe(true);
     expect(pitch!.mismatch).toBeLessThan(10);
+    // Gibson dropback of the fitted system (steady-state form Ttheta2 - 2 zeta / w, memory high)
+    const p = pitch!.parameters;
+    expect(pitch!.dropback!.dropbackRatio).toBeCloseTo(1 / p['inverseTtheta2']! - (2 * p['dampingRatio']!) / p['naturalFrequency']!, 12);
     expect(roll!.axis).toBe('roll');
     expect(roll!.valid).toBe(true);
   });
