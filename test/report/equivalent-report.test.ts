@@ -56,4 +56,15 @@ describe('KT-4F sample: equivalent systems and bandwidth', () => {
     expect(text).toContain('equivalent-time-delay-pitch (equivalent)');
     expect(text).toMatch(/pitch-bandwidth-phase-delay-cat-a .* Level 1 region +Level 2/);
   });
+
+  it('draws every condition of a sweep on one bandwidth chart in the envelope summary', () => {
+    const second = { ...condition, id: 'tracking-2000m-b' };
+    const sweep = { ...outcome.results, conditions: [condition, second] };
+    const html = renderHtml(buildReportView(sweep, outcome.sets, { reportId: 'MG-EQ2' }));
+    const at = html.indexOf('id="trend-bandwidth-pitch-bandwidth-phase-delay-cat-a"');
+    expect(at).toBeGreaterThan(0);
+    const svg = html.slice(at, html.indexOf('</svg>', at));
+    expect(svg).toContain('2 condition(s) drawn');
+    expect(svg.match(/<circle [^>]*r="(4|2.2)" fill="#000"/g)).toHaveLength(2); // the conditions, not the dot screen of Level 3
+  });
 });

@@ -4,6 +4,7 @@
  * drawn, or why none is.
  */
 import type { ConditionResult } from '../../types.js';
+import { bandwidthChart, bandwidthFinding } from '../charts/bandwidth-chart.js';
 import { trendChart } from '../charts/trend-chart.js';
 import { altitudesVary, KEY_FIGURES, type BoundaryUse, type KeyFigure, type TrendAxis, type TrendSeries, trendSeries } from '../charts/trend-data.js';
 import type { ChartView } from '../report-view.js';
@@ -46,8 +47,24 @@ function trendView(all: TrendSeries, figure: KeyFigure, axis: TrendAxis): ChartV
 
 export function envelopeTrends(conditions: readonly ConditionResult[]): ChartView[] {
   const axes: TrendAxis[] = altitudesVary(conditions) ? ['airspeed', 'altitude'] : ['airspeed'];
-  return KEY_FIGURES.flatMap((figure) => {
+  const trends = KEY_FIGURES.flatMap((figure) => {
     const series = trendSeries(conditions, figure);
     return axes.map((axis) => trendView(series, figure, axis));
   });
+  return [...trends, ...bandwidthCharts(conditions)];
+}
+
+/** All conditions of the sweep on one bandwidth chart per region criterion (its regions differ by category). */
+function bandwidthCharts(conditions: readonly ConditionResult[]): ChartView[] {
+  const byCriterion = new Map<string, ConditionResult[]>();
+  for (const c of conditions) {
+    const f = bandwidthFinding(c);
+    if (!f) continue;
+    byCriterion.set(f.criterion, [...(byCriterion.get(f.criterion) ?? []), c]);
+  }
+  return [...byCriterion.entries()].map(([criterion, group]) => ({
+    id: `trend-bandwidth-${criterion}`,
+    title: `Pitch bandwidth and phase delay, all conditions (${criterion})`,
+    ...bandwidthChart(group, `sweep-${criterion}`),
+  }));
 }
