@@ -11,8 +11,7 @@ import { analyseResponses } from '../responses/analyse-responses.js';
 import { bankAnglesOf } from '../criteria/bank-angles.js';
 import { assembleCondition } from '../results.js';
 import { withSensitivities } from '../sensitivity/finding-sensitivities.js';
-import type { AircraftClass, ConditionResponses, ConditionResult, FlightCondition, ModalAnalysis, ResolvedCriteriaSet, ResultsContents, SensitivityChoice, VerdictCounts } from '../types.js';
-import type { ResponseFigures } from '../criteria/evaluators.js';
+import type { AircraftClass, ConditionResult, FlightCondition, ModalAnalysis, ResolvedCriteriaSet, ResultsContents, SensitivityChoice, VerdictCounts } from '../types.js';
 
 export interface ConditionsChecked {
   /** one per condition, in the order given (only those kept, when a `keep` test was given) */
@@ -71,8 +70,9 @@ export function checkOneCondition(
   const analysis = condition.form === 'frequencyResponses' ? NO_ANALYSIS : analyseModes(condition.system, { airspeed: condition.airspeed });
   const responses = condition.form === 'frequencyResponses' ? null : analyseResponses(condition, analysis, { bankAngles: bankAnglesOf(sets) });
   const fits = fitMeasuredResponses(condition);
-  // bandwidth and phase delay: from measured responses where given, else from the model's theta response
-  const responseFigures = fits.responses ?? figuresOfModel(responses);
+  // bandwidth and phase delay for the region criteria: from measured responses (the model's own
+  // theta response is not yet judged against the regions; its figures are in `responses.pitch`)
+  const responseFigures = fits.responses;
   const augmented = {
     responses,
     ...(fits.systems.length > 0 ? { equivalentSystems: fits.systems } : {}),
@@ -91,23 +91,6 @@ export function checkOneCondition(
     }
   }
   return assembleCondition(condition, analysis, evaluations, contents, responses, fits);
-}
-
-/** The bandwidth figures the region criteria read, from the model's pitch responses (null without a pitch control). */
-function figuresOfModel(responses: ConditionResponses | null): ResponseFigures | undefined {
-  const pitch = responses?.pitch;
-  if (!pitch) return undefined;
-  return {
-    pitch: {
-      bandwidth: pitch.bandwidth,
-      phaseDelay: pitch.phaseDelay,
-      method: `theta/${pitch.input} from the model (${pitch.method})`,
-      reasons: {
-        ...(pitch.reasons.bandwidth ? { bandwidth: pitch.reasons.bandwidth } : {}),
-        ...(pitch.reasons.phaseDelay ? { phaseDelay: pitch.reasons.phaseDelay } : {}),
-      },
-    },
-  };
 }
 
 /** The modal analysis of a condition without a state-space model: nothing to analyse. */
