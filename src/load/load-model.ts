@@ -80,11 +80,6 @@ function responseReferences(text: string, file: string): { file: string; field: 
   }
 }
 
-/** Whether `path` lies, by real path, inside `folder` (itself by real path). */
-export function isInside(path: string, folder: string): boolean {
-  const rel = relative(realOrSelf(folder), realOrSelf(path));
-  return rel !== '' && !rel.startsWith(`..${sep}`) && rel !== '..' && !isAbsolute(rel);
-}
 
 function checkContained(tablePath: string, modelPath: string, trusted: readonly string[], namedAt: Omit<InputIssue, 'message' | 'code'>, what: string): void {
   const modelFolder = dirname(modelPath);
