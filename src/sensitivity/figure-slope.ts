@@ -54,7 +54,10 @@ export function figureSlope(quantity: Quantity, roots: readonly Complex[], chang
       return { value: -1 / root.re, derivative: changes[0]!.re / (root.re * root.re) };
     }
     case 'time_to_bank':
-      // a response figure (time history to a roll command), not a function of the roots alone
+    case 'equivalent_time_delay':
+    case 'pitch_bandwidth':
+    case 'pitch_phase_delay':
+      // response or equivalent-system figures, not functions of the roots alone
       return null;
   }
 }

@@ -59,7 +59,7 @@ export interface SensitivityInput {
 export function withSensitivities(input: SensitivityInput): ConditionEvaluation {
   const { evaluation, choice } = input;
   if (choice === 'none') return evaluation;
-  const chosen = evaluation.findings.map((f) => f.value !== null && f.verdict !== 'not_evaluated' && (choice === 'all' || f.verdict !== 'pass'));
+  const chosen = evaluation.findings.map((f) => f.value !== null && f.basis === undefined && f.verdict !== 'not_evaluated' && (choice === 'all' || f.verdict !== 'pass'));
   if (!chosen.includes(true)) return evaluation;
   const source = input.condition.written;
   const slopes = source ? buildSlopes(input.condition) : null;
