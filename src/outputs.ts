@@ -55,8 +55,14 @@ export async function renderOutputs(outcome: CheckOutcome, request: OutputReques
     // The document's machinery (templates, Markdown, charts, browser) loads only when asked for.
     const [{ buildReportView }, { renderHtml }] = await Promise.all([import('./report/view-model.js'), import('./report/html.js')]);
     const reportId = reportIdOf(outcome);
+    const { responseCurves } = await import('./responses/response-curves.js');
+    const byId = new Map(outcome.model.conditions.map((c) => [c.id, c]));
     const view = buildReportView(results, sets, {
       reportId,
+      responseCurves: (c) => {
+        const condition = byId.get(c.id);
+        return condition && c.responses ? responseCurves(condition, c.responses, c.modes) : null;
+      },
       ...(request.comparison ? { comparison: request.comparison } : {}),
       detail: request.detail,
     });

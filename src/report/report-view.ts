@@ -3,6 +3,7 @@
  * already a symbol and a word. Templates do no arithmetic and make no decisions.
  */
 import type { EvidenceClass, Verdict } from '../types.js';
+import type { ResponsesView } from './responses-view.js';
 import type { VerdictMark } from './verdict-marks.js';
 
 export interface VerdictTally {
@@ -118,6 +119,8 @@ export interface ConditionView {
   equivalentSystems: EquivalentSystemRow[];
   /** why the charts are left out of this section, when they are (large sweeps) */
   chartsOmitted: string | null;
+  /** responses to the cockpit controls; null when the condition names none */
+  responses: ResponsesView | null;
 }
 
 export interface EquivalentSystemRow {

@@ -19,6 +19,8 @@ import { bandwidthChart, bandwidthFinding } from './charts/bandwidth-chart.js';
 import { bodeOverlayChart } from './charts/bode-overlay-chart.js';
 import { dutchRollChart } from './charts/dutch-roll-chart.js';
 import { sPlaneChart } from './charts/s-plane-chart.js';
+import type { ControlCurves } from '../responses/response-curves.js';
+import { responsesView } from './responses-view.js';
 import { shortPeriodChart } from './charts/short-period-chart.js';
 import { safeId } from './charts/svg-kit.js';
 import { categoryLabel, classLabel, MODE_LABEL, QUANTITY_LABEL, QUANTITY_UNIT } from './labels.js';
@@ -38,6 +40,8 @@ export interface ReportViewOptions {
   detail?: DetailMode;
   /** comparison with a baseline run, shown as "Changes since the baseline" */
   comparison?: Comparison;
+  /** the response curves of a condition (step and frequency responses), computed from the model; absent = none drawn */
+  responseCurves?: (condition: ConditionResult) => ControlCurves[] | null;
 }
 
 /**
@@ -234,7 +238,7 @@ function subsystemsText(c: ConditionResult): string {
   return parts.join('; ');
 }
 
-function conditionView(c: ConditionResult, anchor: string, withCharts: boolean, chartsOmitted: string, showSet: boolean): ConditionView {
+function conditionView(c: ConditionResult, anchor: string, withCharts: boolean, chartsOmitted: string, showSet: boolean, curves: ReportViewOptions['responseCurves']): ConditionView {
   return {
     id: c.id,
     anchor,
@@ -257,6 +261,7 @@ function conditionView(c: ConditionResult, anchor: string, withCharts: boolean, 
     charts: withCharts ? charts(c) : [],
     equivalentSystems: (c.equivalentSystems ?? []).map(equivalentRow),
     chartsOmitted: withCharts ? null : chartsOmitted,
+    responses: responsesView(c, withCharts && curves ? curves(c) : null),
   };
 }
 
@@ -472,7 +477,7 @@ export function buildReportView(results: Results, sets: ResolvedCriteriaSet[], o
     envelope: results.conditions.length > 1 ? envelopeView(results.conditions, sets, anchorOf) : null,
     comparison: options.comparison ? comparisonView(options.comparison, (id) => anchorById.get(id) ?? null) : null,
     overview: overviewView(results, anchorOf),
-    conditions: selection.detailed.map((i, k) => conditionView(results.conditions[i]!, anchors[i]!, k < SECTION_CHART_CAP, chartsOmitted, sets.length > 1)),
+    conditions: selection.detailed.map((i, k) => conditionView(results.conditions[i]!, anchors[i]!, k < SECTION_CHART_CAP, chartsOmitted, sets.length > 1, options.responseCurves)),
     cautions: [...STANDING_CAUTIONS],
     traceability: {
       inputs: results.inputs.map((i) => ({ role: i.role, path: i.path, sha256: i.sha256 })),

@@ -12,6 +12,7 @@ import { controlChannels, type ControlChannels } from './control-channels.js';
 import { responseReader, DEFAULT_RANGE, type PhaseAnchor } from './frequency-response.js';
 import { bankTimes, rollStepFigures, STANDARD_BANK_ANGLES } from './roll-step-figures.js';
 import { stepResponse } from './step-response.js';
+import { pitchPhaseAnchor } from './pitch-anchor.js';
 import { inverseTtheta2, rollNumerator } from './trade-figures.js';
 
 /** [s] simulated time and sample interval of the step responses */
@@ -54,7 +55,6 @@ export function analyseResponses(condition: FlightCondition, analysis: ModalAnal
   }
 
   const shortPeriod = modeOf(analysis, 'short_period');
-  const phugoid = modeOf(analysis, 'phugoid');
   const dutchRoll = modeOf(analysis, 'dutch_roll');
   const pitch = byAxis.get('pitch');
   const roll = byAxis.get('roll');
@@ -77,7 +77,7 @@ export function analyseResponses(condition: FlightCondition, analysis: ModalAnal
   if (!pitch) pitchReason = 'no pitch control';
   else if (!theta) pitchReason = 'no theta response to the pitch control';
   else if (theta.transfer.reduced.gain === 0) pitchReason = 'theta does not respond to the pitch control';
-  else pitchFigures = pitchBandwidth(pitch.control.input, theta.transfer.reduced, shortPeriod, phugoid);
+  else pitchFigures = pitchBandwidth(pitch.control.input, theta.transfer.reduced, analysis.modes);
 
   // full roll-control step
   let timeToBank: ConditionResponses['timeToBank'] = [];
@@ -116,25 +116,14 @@ export function analyseResponses(condition: FlightCondition, analysis: ModalAnal
 }
 
 /**
- * Bandwidth of theta / pitch control. The phase branch is pinned at mid band, between the
- * phugoid and the short period (sqrt(omega_ph omega_sp), or omega_sp / 4), nearest -90 deg:
- * there a rate-response aircraft looks like K/s. The response type follows from that phase:
- * within 45 deg of 0 it is attitude-command (flat gain), else rate response.
+ * Bandwidth of theta / pitch control, the phase branch pinned at mid band (pitch-anchor.ts).
+ * The response type follows from the phase there: within 45 deg of 0 it is attitude-command
+ * (flat gain), else rate response.
  */
-function pitchBandwidth(input: string, transfer: ConditionResponsesTransfer, shortPeriod: Mode | null, phugoid: Mode | null): PitchBandwidth {
-  const wsp = shortPeriod?.naturalFrequency ?? null;
-  const wph = phugoid?.naturalFrequency ?? null;
-  let anchor: PhaseAnchor | undefined;
-  let how: string;
-  if (wsp !== null && wph !== null && wph < wsp) {
-    anchor = { omega: Math.sqrt(wph * wsp), phase: -90 };
-    how = `phase branch nearest -90 deg at sqrt(omega_ph omega_sp) = ${anchor.omega.toPrecision(3)} rad/s`;
-  } else if (wsp !== null) {
-    anchor = { omega: wsp / 4, phase: -90 };
-    how = `phase branch nearest -90 deg at omega_sp / 4 = ${anchor.omega.toPrecision(3)} rad/s`;
-  } else {
-    how = `phase taken in (-180, 180] deg at ${DEFAULT_RANGE[0]} rad/s (no short period to pin it by)`;
-  }
+function pitchBandwidth(input: string, transfer: ConditionResponsesTransfer, modes: readonly Mode[]): PitchBandwidth {
+  const pinned = pitchPhaseAnchor(modes);
+  const anchor: PhaseAnchor | undefined = pinned?.anchor;
+  let how = pinned?.how ?? `phase taken in (-180, 180] deg at ${DEFAULT_RANGE[0]} rad/s (no short period to pin it by)`;
   const source = { kind: 'zpk' as const, transfer };
   let responseType: 'rate' | 'attitude' = 'rate';
   if (anchor) {

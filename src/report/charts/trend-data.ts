@@ -13,9 +13,14 @@ export interface KeyFigure {
   /** axis label with the unit in brackets */
   axis: string;
   mode: ModeKind;
-  quantity: Quantity;
+  /** the bounded quantity whose findings carry the figure; null for a figure no criterion judges */
+  quantity: Quantity | null;
   /** the figure from the mode when no finding carries it (null: only findings carry it) */
   fromMode: ((m: ResultMode) => number | null) | null;
+  /** the figure from the condition's other results (e.g. its responses) when neither gives it */
+  fromCondition?: (c: ConditionResult) => number | null;
+  /** a figure only some models give (responses to cockpit controls): no chart when no condition has it */
+  optional?: true;
 }
 
 export const KEY_FIGURES: readonly KeyFigure[] = [
@@ -24,6 +29,17 @@ export const KEY_FIGURES: readonly KeyFigure[] = [
   { key: 'dr-damping', title: 'Dutch roll damping ratio', axis: '\u03b6d [\u2013]', mode: 'dutch_roll', quantity: 'damping_ratio', fromMode: (m) => m.dampingRatio },
   { key: 'dr-frequency', title: 'Dutch roll frequency', axis: '\u03c9nd [rad/s]', mode: 'dutch_roll', quantity: 'natural_frequency', fromMode: (m) => m.naturalFrequency },
   { key: 'roll-tau', title: 'Roll-mode time constant', axis: '\u03c4R [s]', mode: 'roll', quantity: 'time_constant', fromMode: (m) => m.timeConstant },
+  { key: 'time-to-bank', title: 'Time to bank (roll performance)', axis: 't to bank [s]', mode: 'roll', quantity: 'time_to_bank', fromMode: null, optional: true },
+  {
+    key: 'pitch-bandwidth',
+    title: 'Pitch attitude bandwidth',
+    axis: '\u03c9BW,\u03b8 [rad/s]',
+    mode: 'short_period',
+    quantity: null,
+    fromMode: null,
+    fromCondition: (c) => c.responses?.pitch?.bandwidth ?? null,
+    optional: true,
+  },
 ];
 
 export type TrendAxis = 'airspeed' | 'altitude';
@@ -83,6 +99,7 @@ export function trendSeries(conditions: readonly ConditionResult[], figure: KeyF
       const mode = c.modes.find((m) => m.kind === figure.mode);
       y = mode ? figure.fromMode(mode) : null;
     }
+    if (y === null && figure.fromCondition) y = figure.fromCondition(c);
     if (y === null || !Number.isFinite(y)) {
       missing += 1;
       altitudeMissing += 1;

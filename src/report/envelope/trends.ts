@@ -49,6 +49,7 @@ export function envelopeTrends(conditions: readonly ConditionResult[]): ChartVie
   const axes: TrendAxis[] = altitudesVary(conditions) ? ['airspeed', 'altitude'] : ['airspeed'];
   const trends = KEY_FIGURES.flatMap((figure) => {
     const series = trendSeries(conditions, figure);
+    if (figure.optional && series.points.length === 0) return [];
     return axes.map((axis) => trendView(series, figure, axis));
   });
   return [...trends, ...bandwidthCharts(conditions)];
