@@ -32,8 +32,10 @@ export function analyseResponses(condition: FlightCondition, analysis: ModalAnal
   const poles = allPoles(condition, analysis);
   const byAxis = new Map<ControlAxis, ControlChannels>();
   const notes: string[] = [];
+  // the channels share A: the spectra of its blocks are worked out once
+  const spectra = new Map<string, Complex[]>();
   for (const axis of named) {
-    const channels = controlChannels(condition, axis, condition.controls[axis]!, poles);
+    const channels = controlChannels(condition, axis, condition.controls[axis]!, poles, spectra);
     byAxis.set(axis, channels);
     notes.push(...channels.notes);
   }

@@ -8,7 +8,7 @@
 import type { CockpitControl, ControlAxis, FlightCondition } from '../types.js';
 import { linearChannel, type LinearChannel } from './linear-channel.js';
 import { outputRow, type OutputRow } from './output-rows.js';
-import { channelTransfer, type ChannelTransfer } from './transfer-function.js';
+import { channelTransfer, type BlockSpectra, type ChannelTransfer } from './transfer-function.js';
 import type { Complex } from '../types.js';
 
 /** The outputs of each control, its primary rate first. */
@@ -41,7 +41,7 @@ export interface ControlChannels {
   notes: string[];
 }
 
-export function controlChannels(condition: FlightCondition, axis: ControlAxis, control: CockpitControl, poles: readonly Complex[]): ControlChannels {
+export function controlChannels(condition: FlightCondition, axis: ControlAxis, control: CockpitControl, poles: readonly Complex[], spectra: BlockSpectra = new Map()): ControlChannels {
   const { system, airspeed } = condition;
   const j = system.inputs.indexOf(control.input);
   const column = system.B.map((row) => row[j]!);
@@ -57,7 +57,7 @@ export function controlChannels(condition: FlightCondition, axis: ControlAxis, c
   }
   const channels = rows.map((row): ControlChannel => {
     const channel = linearChannel(system.A, column, row.c, row.d[j]!);
-    return { output: row, channel, transfer: channelTransfer(channel, poles) };
+    return { output: row, channel, transfer: channelTransfer(channel, poles, spectra) };
   });
   let sign: 1 | -1 = 1;
   const primary = channels.find((c) => c.output.name === CONTROL_OUTPUTS[axis][0]);

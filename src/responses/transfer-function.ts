@@ -42,12 +42,18 @@ export interface ChannelTransfer {
 /** Markov parameters below this fraction of |c| |A|^k |b| count as zero. */
 const MARKOV_TOLERANCE = 1e-10;
 
-export function channelTransfer(channel: LinearChannel, allPoles?: readonly Complex[]): ChannelTransfer {
+/**
+ * Eigenvalues of A restricted to some states, by the set of states: the channels of one
+ * condition share A, and most share their blocks too. Give one cache per A.
+ */
+export type BlockSpectra = Map<string, Complex[]>;
+
+export function channelTransfer(channel: LinearChannel, allPoles?: readonly Complex[], spectra: BlockSpectra = new Map()): ChannelTransfer {
   const states = channelStates(channel);
   const reducedChannel = restrictChannel(channel, states.kept);
-  const reduced = reducedTransfer(reducedChannel);
+  const reduced = reducedTransfer(reducedChannel, blockSpectrum(channel, states.kept, spectra));
   const leftOut = [...states.unreached, ...states.unseen];
-  const cancelled = leftOut.length > 0 ? blockEigenvalues(channel, states) : [];
+  const cancelled = leftOut.length > 0 ? blockEigenvalues(channel, states, spectra) : [];
   const poles = allPoles ? [...allPoles] : spectrum(rowsOf(channel.A, channel.n));
   const identicallyZero = reduced.gain === 0;
   const full: ZeroPoleGain = {
@@ -65,19 +71,26 @@ export function channelTransfer(channel: LinearChannel, allPoles?: readonly Comp
 }
 
 /** Eigenvalues of the unreached block and of the reached-unseen block. */
-function blockEigenvalues(channel: LinearChannel, states: ChannelStates): Complex[] {
+function blockEigenvalues(channel: LinearChannel, states: ChannelStates, spectra: BlockSpectra): Complex[] {
   const out: Complex[] = [];
-  for (const block of [states.unreached, states.unseen]) {
-    if (block.length === 0) continue;
-    const sub = restrictChannel(channel, block);
-    out.push(...spectrum(rowsOf(sub.A, sub.n)));
-  }
+  for (const block of [states.unreached, states.unseen]) if (block.length > 0) out.push(...blockSpectrum(channel, block, spectra));
   return out;
 }
 
-function reducedTransfer(channel: LinearChannel): ZeroPoleGain {
+function blockSpectrum(channel: LinearChannel, block: readonly number[], spectra: BlockSpectra): Complex[] {
+  if (block.length === 0) return [];
+  const key = block.join(',');
+  let values = spectra.get(key);
+  if (values === undefined) {
+    const sub = restrictChannel(channel, block);
+    values = spectrum(rowsOf(sub.A, sub.n));
+    spectra.set(key, values);
+  }
+  return values;
+}
+
+function reducedTransfer(channel: LinearChannel, poles: Complex[]): ZeroPoleGain {
   const { n, A, b, c, d, delay } = channel;
-  const poles = n > 0 ? spectrum(rowsOf(A, n)) : [];
   if (d !== 0) {
     const Az = new Float64Array(n * n);
     for (let i = 0; i < n; i += 1) for (let j = 0; j < n; j += 1) Az[i * n + j] = A[i * n + j]! - (b[i]! * c[j]!) / d;
