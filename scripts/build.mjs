@@ -1,9 +1,11 @@
 #!/usr/bin/env node
 /**
  * Build dist/ with the TypeScript compiler (tsconfig.build.json), write the parsed and checked
- * form of each shipped criteria set to dist/criteria-cache/ (src/load/criteria-cache.ts), and
- * record a digest of what the build read (every file under src/, the shipped criteria files,
- * both tsconfig files, the compiler's version) in dist/.sources-sha256.
+ * form of each shipped criteria set to dist/criteria-cache/ (src/load/criteria-cache.ts) and
+ * the review document's templates compiled to dist/report/templates-compiled.cjs
+ * (src/report/precompiled-templates.ts), and record a digest of what the build read (every
+ * file under src/ and templates/, the shipped criteria files, both tsconfig files, the
+ * compiler's version) in dist/.sources-sha256.
  *
  *   node scripts/build.mjs              build (npm run build)
  *   node scripts/build.mjs --if-stale   build only when dist/ is not that of the sources (npm's prepare)
@@ -50,7 +52,8 @@ export function sourcesDigest(root) {
   const hash = createHash('sha256');
   hash.update(`typescript ${compilerVersion(root)}\n`);
   const criteria = existsSync(join(root, 'criteria')) ? filesUnder(join(root, 'criteria')).filter((f) => /\.ya?ml$/i.test(f)) : [];
-  const files = [...INPUTS.map((f) => join(root, f)).filter((f) => existsSync(f)), ...filesUnder(join(root, 'src')), ...criteria]
+  const templates = existsSync(join(root, 'templates')) ? filesUnder(join(root, 'templates')) : [];
+  const files = [...INPUTS.map((f) => join(root, f)).filter((f) => existsSync(f)), ...filesUnder(join(root, 'src')), ...criteria, ...templates]
     .map((f) => relative(root, f).split(sep).join('/'))
     .sort();
   for (const file of files) {
@@ -78,8 +81,19 @@ async function build(root) {
   const child = spawnSync(process.execPath, [tsc, '-p', join(root, 'tsconfig.build.json')], { stdio: 'inherit' });
   if (child.status !== 0) return child.status ?? 1;
   await writeCriteriaCache(root);
+  await writeCompiledTemplates(root);
   writeFileSync(join(root, STAMP), `${sourcesDigest(root)}\n`);
   return 0;
+}
+
+/** dist/report/templates-compiled.cjs: every template of templates/, compiled by handlebars. */
+async function writeCompiledTemplates(root) {
+  const dist = (file) => pathToFileURL(join(root, 'dist', 'report', file)).href;
+  const { readTemplateFiles } = await import(dist('template-files.js'));
+  const { precompiledModuleText } = await import(dist('precompiled-templates.js'));
+  const handlebars = createRequire(join(root, 'package.json'))('handlebars');
+  const text = precompiledModuleText(readTemplateFiles(join(root, 'templates')), (source, options) => handlebars.precompile(source, options));
+  writeFileSync(join(root, 'dist', 'report', 'templates-compiled.cjs'), text);
 }
 
 /** dist/criteria-cache/<id>.json for each shipped criteria/<id>.yaml that passes the schema. */
