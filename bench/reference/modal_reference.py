@@ -73,9 +73,9 @@ BOUNDS = {
         "B": [(0.08, None), (0.02, None), (0.0, None)],
         "C": [(0.08, None), (0.02, None), (0.0, None)],
     },
-    ("dutch_roll", "damping_frequency_product"): {
-        "B": [(0.15, None), (0.05, None), (None, None)],
-        "C": [(0.15, None), (0.05, None), (None, None)],
+    ("dutch_roll", "damping_frequency_product"): {  # Category C: the Classes II-L and III row
+        "B": [(0.15, None), (0.05, None), (0.0, None)],
+        "C": [(0.10, None), (0.05, None), (0.0, None)],
     },
     ("dutch_roll", "natural_frequency"): {
         "B": [(0.4, None), (0.4, None), (0.4, None)],
