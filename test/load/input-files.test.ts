@@ -98,16 +98,16 @@ describe('a criteria file extends only shipped sets and files in its folder', ()
   it('a file outside is refused at extends; a trusted folder widens it; a shipped set by path is fine', async () => {
     const root = mkdtempSync(join(tmpdir(), 'modalgate-extends-'));
     mkdirSync(join(root, 'sets'));
-    mkdirSync(join(root, 'shared'));
+    mkdirSync(join(root, 'common'));
     const shipped = fileURLToPath(new URL('../../criteria/mil-f-8785c.yaml', import.meta.url));
-    // the shared base only extends the shipped set and renames it
-    writeFileSync(join(root, 'shared', 'base.yaml'), `format: modalgate-criteria/1\nid: shared-base\ntitle: Shared base\nextends: ${shipped}\ncriteria: []\n`);
-    writeFileSync(join(root, 'sets', 'c.yaml'), 'format: modalgate-criteria/1\nid: programme\ntitle: Programme\nextends: ../shared/base.yaml\ncriteria: []\n');
+    // the common base only extends the shipped set and renames it
+    writeFileSync(join(root, 'common', 'base.yaml'), `format: modalgate-criteria/1\nid: common-base\ntitle: Common base\nextends: ${shipped}\ncriteria: []\n`);
+    writeFileSync(join(root, 'sets', 'c.yaml'), 'format: modalgate-criteria/1\nid: programme\ntitle: Programme\nextends: ../common/base.yaml\ncriteria: []\n');
     const message = await messageOf(loadCriteriaSet(join(root, 'sets', 'c.yaml')));
-    expect(message).toContain(`${join(root, 'sets', 'c.yaml')}:4:10: extends: the criteria file ${join(root, 'shared', 'base.yaml')} lies outside the folder of`);
-    const set = await loadCriteriaSet(join(root, 'sets', 'c.yaml'), { trustedFolders: [join(root, 'shared')] }).catch((e: unknown) => e);
+    expect(message).toContain(`${join(root, 'sets', 'c.yaml')}:4:10: extends: the criteria file ${join(root, 'common', 'base.yaml')} lies outside the folder of`);
+    const set = await loadCriteriaSet(join(root, 'sets', 'c.yaml'), { trustedFolders: [join(root, 'common')] }).catch((e: unknown) => e);
     expect(set instanceof InputError ? set.message : '').toBe('');
-    expect((set as { set: { chain: string[] } }).set.chain).toEqual(['mil-f-8785c', 'shared-base', 'programme']);
+    expect((set as { set: { chain: string[] } }).set.chain).toEqual(['mil-f-8785c', 'common-base', 'programme']);
   });
 });
 
