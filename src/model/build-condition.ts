@@ -133,12 +133,7 @@ export function buildCondition(written: WrittenCondition, settings: BuildSetting
   return {
     ok: true,
     value: {
-      id: written.id,
-      phase: written.phase,
-      airspeed: written.airspeed * length,
-      altitude,
-      requiredLevel,
-      nAlpha: written.nAlpha ?? null,
+      ...conditionHead(written, requiredLevel, altitude, length),
       theta0: theta0Used,
       form,
       system,
@@ -170,12 +165,7 @@ function responsesOnlyCondition(
   return {
     ok: true,
     value: {
-      id: written.id,
-      phase: written.phase,
-      airspeed: written.airspeed * length,
-      altitude,
-      requiredLevel,
-      nAlpha: written.nAlpha ?? null,
+      ...conditionHead(written, requiredLevel, altitude, length),
       theta0: null,
       form: 'frequencyResponses',
       system: { states: [], A: [], inputs: [], B: [], outputs: [], C: [], D: [] },
@@ -185,6 +175,18 @@ function responsesOnlyCondition(
       notes: ['given by frequency responses only: no state-space model, so no roots'],
     },
     notes: [],
+  };
+}
+
+/** The fields every built condition takes from its written form (airspeed [m/s], altitude [m]). */
+function conditionHead(written: WrittenCondition, requiredLevel: Level | null, altitude: number | null, length: number) {
+  return {
+    id: written.id,
+    phase: written.phase,
+    airspeed: written.airspeed * length,
+    altitude,
+    requiredLevel,
+    nAlpha: written.nAlpha ?? null,
   };
 }
 
